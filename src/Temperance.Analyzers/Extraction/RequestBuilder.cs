@@ -1,0 +1,597 @@
+using System.Collections.Generic;
+using System.Linq;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
+using Temperance.Model;
+using Temperance.Surfaces;
+
+namespace Temperance.Extraction
+{
+    /// <summary>
+    /// Turns what one operation block collected into requests. Value flow lives here and nowhere else:
+    /// initializers, later mutations of the same local/field, nested option objects, bags, Clone/with, sends.
+    /// </summary>
+    internal sealed class RequestBuilder
+    {
+        private const int EvidenceLength = 60;
+
+        private readonly SurfaceCatalog catalog;
+        private readonly CallContext context;
+        private readonly List<Instance> instances = new List<Instance>();
+
+        private RequestBuilder(SurfaceCatalog catalog, CallContext context)
+        {
+            this.catalog = catalog;
+            this.context = context;
+        }
+
+        public static IReadOnlyList<Request> Build(SurfaceCatalog catalog, CallContext context, BlockCollector collected)
+        {
+            var builder = new RequestBuilder(catalog, context);
+            var clones = collected.Invocations.Where(builder.IsClone).Cast<IOperation>();
+            foreach (var creation in collected.Creations.Concat(clones).OrderBy(c => c.Syntax.SpanStart))
+            {
+                builder.AddCreation(creation);
+            }
+
+            foreach (var mutation in collected.Mutations.OrderBy(m => m.Syntax.SpanStart))
+            {
+                builder.AddMutation(mutation);
+            }
+
+            foreach (var invocation in collected.Invocations.Where(i => !builder.IsClone(i)).OrderBy(i => i.Syntax.SpanStart))
+            {
+                builder.AddInvocation(invocation);
+            }
+
+            return builder.instances
+                .Where(i => !i.IsPayload || (i.PayloadHasSamplingKey && i.PayloadHasModel && i.PayloadSent))
+                .Select(i => i.Request)
+                .ToList();
+        }
+
+        private void AddCreation(IOperation creation)
+        {
+            switch (creation)
+            {
+                case IObjectCreationOperation objectCreation when catalog.Find(objectCreation.Type) is { } surface:
+                    if (IsNestedInContainer(objectCreation))
+                    {
+                        return; // read as part of the container's request
+                    }
+
+                    var request = NewRequest(surface, creation, originVisible: true);
+                    ReadInitializer(surface, objectCreation.Initializer, request);
+                    Track(new Instance(request, creation, HolderOf(creation)));
+                    return;
+
+                case IObjectCreationOperation payload:
+                    AddPayload(payload, payload.Initializer);
+                    return;
+
+                case IAnonymousObjectCreationOperation anonymous:
+                    AddAnonymousPayload(anonymous);
+                    return;
+
+                // var b = a.Clone(): b starts with a's writes. Inherited writes keep their locations, and the analyzer
+                // reports a location once, so a value is never judged twice.
+                case IInvocationOperation clone when catalog.Find(clone.Type) is { } cloneSurface:
+                    var original = InstanceOf(clone.Instance!, clone.Syntax.SpanStart);
+                    var copy = NewRequest(cloneSurface, creation, originVisible: original?.Request.OriginVisible ?? false);
+                    Inherit(copy, original);
+                    Track(new Instance(copy, creation, HolderOf(creation)));
+                    return;
+
+                case IWithOperation with when catalog.Find(with.Type) is { } recordSurface:
+                    var source = FindInstance(SymbolOf(with.Operand), with.Syntax.SpanStart);
+                    var derived = NewRequest(recordSurface, creation, originVisible: source?.Request.OriginVisible ?? false);
+                    Inherit(derived, source);
+                    ReadInitializer(recordSurface, with.Initializer, derived);
+                    Track(new Instance(derived, creation, HolderOf(creation)));
+                    return;
+            }
+        }
+
+        private void AddMutation(ISimpleAssignmentOperation assignment)
+        {
+            var target = (IPropertyReferenceOperation)assignment.Target;
+            var property = target.Property;
+            if (property.IsIndexer)
+            {
+                // bag["key"] = value, where the bag is a surface member or a payload local.
+                var key = target.Arguments.Length == 1 ? ValueReader.ConstantString(target.Arguments[0].Value) : null;
+                if (key == null)
+                {
+                    return;
+                }
+
+                if (target.Instance is IPropertyReferenceOperation bag && catalog.Find(bag.Property.ContainingType) is { } bagSurface
+                    && bag.Property.Name == bagSurface.BagMember)
+                {
+                    var owner = InstanceFor(bag.Instance, bagSurface, assignment);
+                    ReadKey(bagSurface.Keys, key, assignment.Value, assignment.Syntax, owner);
+                }
+                else if (FindInstance(SymbolOf(target.Instance), assignment.Syntax.SpanStart) is { IsPayload: true } payload)
+                {
+                    ReadKey(RawJsonSurface.Keys, key, assignment.Value, assignment.Syntax, payload);
+                }
+
+                return;
+            }
+
+            if (catalog.Find(property.ContainingType) is { } surface)
+            {
+                var owner = InstanceFor(target.Instance, surface, assignment);
+                ReadMember(surface, property, assignment.Value, assignment.Syntax, owner.Request);
+            }
+        }
+
+        private void AddInvocation(IInvocationOperation invocation)
+        {
+            var method = invocation.TargetMethod;
+            if (invocation.Instance != null && catalog.Find(invocation.Instance.Type) is { } surface)
+            {
+                if (method.Name == surface.KeyedMethod && invocation.Arguments.Length >= 2
+                    && ValueReader.ConstantString(invocation.Arguments[0].Value) is { } key)
+                {
+                    var owner = InstanceFor(invocation.Instance, surface, invocation);
+                    ReadKey(surface.Keys, key, invocation.Arguments[1].Value, invocation.Syntax, owner);
+                    return;
+                }
+
+                if (method.Name == surface.ShapeMethod && invocation.Arguments.Length >= 1)
+                {
+                    var owner = InstanceFor(invocation.Instance, surface, invocation);
+                    var kind = ValueReader.ConstantString(invocation.Arguments[0].Value);
+                    owner.Request.ResponseShape = kind is "json_schema" or "json" ? ResponseShape.JsonSchema : ResponseShape.Grammar;
+                    owner.Request.ResponseShapeEvidence = Evidence(invocation.Syntax);
+                    return;
+                }
+            }
+
+            // payload.Add("temperature", 0.2)
+            if (method.Name == "Add" && invocation.Arguments.Length == 2 && invocation.Instance != null
+                && FindInstance(SymbolOf(invocation.Instance), invocation.Syntax.SpanStart) is { IsPayload: true } payloadOwner
+                && ValueReader.ConstantString(invocation.Arguments[0].Value) is { } payloadKey)
+            {
+                ReadKey(RawJsonSurface.Keys, payloadKey, invocation.Arguments[1].Value, invocation.Syntax, payloadOwner);
+                return;
+            }
+
+            var serialises = BlockCollector.IsSerialisation(method);
+            foreach (var operand in Operands(invocation))
+            {
+                var instance = InstanceOf(operand, invocation.Syntax.SpanStart);
+                if (instance == null)
+                {
+                    continue;
+                }
+
+                if (instance.IsPayload)
+                {
+                    instance.PayloadSent |= serialises;
+                    continue;
+                }
+
+                if (instance.Request.SendingCall == null)
+                {
+                    instance.Request.SendingCall = method;
+                    instance.Request.SendingCallLocation = invocation.Syntax.GetLocation();
+                    if (method.IsGenericMethod && method.TypeArguments.Length == 1 && instance.Request.ResponseShape is ResponseShape.Unspecified or ResponseShape.Text)
+                    {
+                        instance.Request.ResponseShape = ResponseShape.Structured;
+                        instance.Request.ResponseShapeEvidence = $"{method.Name}<{method.TypeArguments[0].Name}>";
+                    }
+                }
+            }
+        }
+
+        private bool IsClone(IInvocationOperation invocation) =>
+            invocation.TargetMethod.Name == "Clone" && invocation.Instance != null && invocation.Arguments.Length == 0
+            && catalog.Find(invocation.Instance.Type) != null && catalog.Find(invocation.Type) != null;
+
+        private static IEnumerable<IOperation> Operands(IInvocationOperation invocation)
+        {
+            if (invocation.Instance != null)
+            {
+                yield return invocation.Instance;
+            }
+
+            foreach (var argument in invocation.Arguments)
+            {
+                yield return argument.Value;
+            }
+        }
+
+        // ---- payloads -------------------------------------------------------------------------------------------
+
+        private void AddPayload(IObjectCreationOperation creation, IObjectOrCollectionInitializerOperation? initializer)
+        {
+            var request = new Request(Providers.Generic, "JSON payload", creation.Syntax.GetLocation(), context, originVisible: true);
+            var instance = new Instance(request, creation, HolderOf(creation)) { IsPayload = true };
+            if (initializer != null)
+            {
+                foreach (var element in initializer.Initializers)
+                {
+                    switch (element)
+                    {
+                        case ISimpleAssignmentOperation { Target: IPropertyReferenceOperation { Property.IsIndexer: true, Arguments.Length: 1 } indexer } assignment
+                            when ValueReader.ConstantString(indexer.Arguments[0].Value) is { } key:
+                            ReadKey(RawJsonSurface.Keys, key, assignment.Value, assignment.Syntax, instance);
+                            break;
+                        case IInvocationOperation { TargetMethod.Name: "Add", Arguments.Length: 2 } add
+                            when ValueReader.ConstantString(add.Arguments[0].Value) is { } addKey:
+                            ReadKey(RawJsonSurface.Keys, addKey, add.Arguments[1].Value, add.Syntax, instance);
+                            break;
+                    }
+                }
+            }
+
+            instance.PayloadSent |= IsSerialisedInPlace(creation);
+            Track(instance);
+        }
+
+        private void AddAnonymousPayload(IAnonymousObjectCreationOperation creation)
+        {
+            var request = new Request(Providers.Generic, "JSON payload", creation.Syntax.GetLocation(), context, originVisible: true);
+            var instance = new Instance(request, creation, HolderOf(creation)) { IsPayload = true };
+            ReadAnonymous(creation, instance);
+            instance.PayloadSent |= IsSerialisedInPlace(creation);
+            Track(instance);
+        }
+
+        private static void ReadAnonymous(IAnonymousObjectCreationOperation creation, Instance instance)
+        {
+            foreach (var element in creation.Initializers)
+            {
+                if (element is not ISimpleAssignmentOperation { Target: IPropertyReferenceOperation property } assignment)
+                {
+                    continue;
+                }
+
+                // Ollama's native API nests sampling under "options".
+                if (property.Property.Name == "options" && ValueReader.Unwrap(assignment.Value) is IAnonymousObjectCreationOperation nested)
+                {
+                    ReadAnonymous(nested, instance);
+                    continue;
+                }
+
+                ReadKey(RawJsonSurface.Keys, property.Property.Name, assignment.Value, assignment.Syntax, instance);
+            }
+        }
+
+        /// <summary>A payload written straight into a send or serialise call: <c>PostAsJsonAsync(url, new { … })</c>.</summary>
+        private static bool IsSerialisedInPlace(IOperation creation)
+        {
+            var parent = creation.Parent;
+            while (parent is IConversionOperation or IArgumentOperation or IParenthesizedOperation)
+            {
+                if (parent is IArgumentOperation { Parent: IInvocationOperation call } && BlockCollector.IsSerialisation(call.TargetMethod))
+                {
+                    return true;
+                }
+
+                parent = parent.Parent;
+            }
+
+            return false;
+        }
+
+        // ---- members, keys and shapes ---------------------------------------------------------------------------
+
+        private void ReadInitializer(SurfaceDefinition surface, IObjectOrCollectionInitializerOperation? initializer, Request request)
+        {
+            if (initializer == null)
+            {
+                return;
+            }
+
+            foreach (var element in initializer.Initializers)
+            {
+                switch (element)
+                {
+                    case ISimpleAssignmentOperation { Target: IPropertyReferenceOperation property } assignment:
+                        ReadMember(surface, property.Property, assignment.Value, assignment.Syntax, request);
+                        break;
+                    // Get-only collections: AdditionalProperties = { ["N"] = 2 }
+                    case IMemberInitializerOperation { InitializedMember: IPropertyReferenceOperation bag } memberInitializer
+                        when bag.Property.Name == surface.BagMember:
+                        ReadBag(surface, memberInitializer.Initializer, request);
+                        break;
+                }
+            }
+        }
+
+        private void ReadMember(SurfaceDefinition surface, IPropertySymbol property, IOperation value, SyntaxNode syntax, Request request)
+        {
+            var name = property.Name;
+            if (surface.Members.TryGetValue(name, out var setting) && catalog.Find(property.ContainingType) != null)
+            {
+                request.AddRange(ValueReader.Read(setting, name, value, property.Type, syntax.GetLocation()));
+            }
+            else if (name == surface.ModelMember)
+            {
+                request.ModelId = ValueReader.ConstantString(value) ?? request.ModelId;
+            }
+            else if (name == surface.ResponseFormatMember)
+            {
+                SetShape(request, value);
+            }
+            else if (surface.NestedMembers.Contains(name))
+            {
+                if (ValueReader.Unwrap(value) is IObjectCreationOperation child && catalog.Find(child.Type) is { } childSurface)
+                {
+                    ReadInitializer(childSurface, child.Initializer, request);
+                }
+            }
+            else if (name == surface.BagMember && ValueReader.Unwrap(value) is IObjectCreationOperation { Initializer: { } bagInitializer })
+            {
+                ReadBag(surface, bagInitializer, request);
+            }
+        }
+
+        private void ReadBag(SurfaceDefinition surface, IObjectOrCollectionInitializerOperation initializer, Request request)
+        {
+            var holder = new Instance(request, null, null);
+            foreach (var element in initializer.Initializers)
+            {
+                switch (element)
+                {
+                    case ISimpleAssignmentOperation { Target: IPropertyReferenceOperation { Property.IsIndexer: true, Arguments.Length: 1 } indexer } assignment
+                        when ValueReader.ConstantString(indexer.Arguments[0].Value) is { } key:
+                        ReadKey(surface.Keys, key, assignment.Value, assignment.Syntax, holder);
+                        break;
+                    case IInvocationOperation { TargetMethod.Name: "Add", Arguments.Length: 2 } add
+                        when ValueReader.ConstantString(add.Arguments[0].Value) is { } addKey:
+                        ReadKey(surface.Keys, addKey, add.Arguments[1].Value, add.Syntax, holder);
+                        break;
+                }
+            }
+        }
+
+        private static void ReadKey(IReadOnlyDictionary<string, Setting> keys, string key, IOperation value, SyntaxNode syntax, Instance instance)
+        {
+            if (instance.IsPayload && key == RawJsonSurface.ModelKey)
+            {
+                instance.PayloadHasModel = true;
+                instance.Request.ModelId = ValueReader.ConstantString(value);
+                return;
+            }
+
+            if (instance.IsPayload && key is "response_format" or "format")
+            {
+                instance.Request.ResponseShape = ResponseShape.JsonObject;
+                instance.Request.ResponseShapeEvidence = Evidence(syntax);
+                return;
+            }
+
+            if (keys.TryGetValue(key, out var setting))
+            {
+                instance.PayloadHasSamplingKey = true;
+                instance.Request.AddRange(ValueReader.Read(setting, $"\"{key}\"", value, null, syntax.GetLocation()));
+            }
+        }
+
+        private static void SetShape(Request request, IOperation value)
+        {
+            var shape = ShapeOf(value);
+            if (shape != ResponseShape.Unspecified)
+            {
+                request.ResponseShape = shape;
+                request.ResponseShapeEvidence = Evidence(value.Syntax);
+            }
+        }
+
+        /// <summary>Reads a response-format value by the factory or type it names; anything else stays Unspecified.</summary>
+        private static ResponseShape ShapeOf(IOperation value)
+        {
+            foreach (var operation in value.DescendantsAndSelf())
+            {
+                switch (operation)
+                {
+                    case IInvocationOperation call:
+                        var name = call.TargetMethod.Name;
+                        if (name.Contains("JsonSchema"))
+                        {
+                            return ResponseShape.JsonSchema;
+                        }
+
+                        if (name == "CreateJsonObjectFormat")
+                        {
+                            return ResponseShape.JsonObject;
+                        }
+
+                        if (name == "CreateJsonFormat")
+                        {
+                            return call.Arguments.Any(a => a.ArgumentKind == ArgumentKind.Explicit) ? ResponseShape.JsonSchema : ResponseShape.JsonObject;
+                        }
+
+                        if (name == "CreateTextFormat")
+                        {
+                            return ResponseShape.Text;
+                        }
+
+                        break;
+                    case IPropertyReferenceOperation { Property.IsStatic: true } property:
+                        switch (property.Property.Name)
+                        {
+                            case "Json":
+                            case "JsonObject":
+                                return ResponseShape.JsonObject;
+                            case "JsonSchema":
+                                return ResponseShape.JsonSchema;
+                            case "Text":
+                                return ResponseShape.Text;
+                        }
+
+                        break;
+                    case IObjectCreationOperation creation:
+                        switch (creation.Type?.Name)
+                        {
+                            case "Grammar":
+                                return ResponseShape.Grammar;
+                            case "JsonOutputFormat":
+                            case "ChatResponseFormatJson":
+                                return ResponseShape.JsonSchema;
+                        }
+
+                        break;
+                    case ILiteralOperation { ConstantValue: { HasValue: true, Value: string text } }:
+                        if (text is "json" or "json_object")
+                        {
+                            return ResponseShape.JsonObject;
+                        }
+
+                        if (text == "text")
+                        {
+                            return ResponseShape.Text;
+                        }
+
+                        break;
+                }
+            }
+
+            return ResponseShape.Unspecified;
+        }
+
+        private static string Evidence(SyntaxNode syntax)
+        {
+            var text = syntax.ToString().Replace("\r", " ").Replace("\n", " ");
+            return text.Length <= EvidenceLength ? text : text.Substring(0, EvidenceLength) + "…";
+        }
+
+        // ---- instances and holders ------------------------------------------------------------------------------
+
+        private Request NewRequest(SurfaceDefinition surface, IOperation creation, bool originVisible) =>
+            new Request(surface.Provider, surface.ShortName, creation.Syntax.GetLocation(), context, originVisible);
+
+        private void Track(Instance instance) => instances.Add(instance);
+
+        /// <summary>The instance a member write belongs to; options from elsewhere (parameter, field, helper) get one of their own.</summary>
+        private Instance InstanceFor(IOperation? receiver, SurfaceDefinition surface, IOperation write)
+        {
+            var holder = SymbolOf(receiver);
+            var existing = FindInstance(holder, write.Syntax.SpanStart);
+            if (existing != null)
+            {
+                return existing;
+            }
+
+            // Options from a parameter, a field or a helper: settings nobody writes here are Unknown, not Unset.
+            var request = new Request(surface.Provider, surface.ShortName, write.Syntax.GetLocation(), context, originVisible: false);
+            var instance = new Instance(request, null, holder);
+            Track(instance);
+            return instance;
+        }
+
+        private static void Inherit(Request request, Instance? source)
+        {
+            if (source == null)
+            {
+                return;
+            }
+
+            request.AddRange(source.Request.Writes);
+            request.ModelId = source.Request.ModelId;
+            request.ResponseShape = source.Request.ResponseShape;
+            request.ResponseShapeEvidence = source.Request.ResponseShapeEvidence;
+        }
+
+        /// <summary>The latest instance held by <paramref name="holder"/> that was created before <paramref name="position"/>.</summary>
+        private Instance? FindInstance(ISymbol? holder, int position)
+        {
+            if (holder == null)
+            {
+                return null;
+            }
+
+            Instance? best = null;
+            foreach (var instance in instances)
+            {
+                if (SymbolEqualityComparer.Default.Equals(instance.Holder, holder)
+                    && (instance.Creation == null || instance.Creation.Syntax.SpanStart <= position))
+                {
+                    best = instance;
+                }
+            }
+
+            return best;
+        }
+
+        private Instance? InstanceOf(IOperation operand, int position)
+        {
+            var unwrapped = ValueReader.Unwrap(operand);
+            foreach (var instance in instances)
+            {
+                if (instance.Creation != null && ReferenceEquals(instance.Creation, unwrapped))
+                {
+                    return instance;
+                }
+            }
+
+            return FindInstance(SymbolOf(unwrapped), position);
+        }
+
+        private bool IsNestedInContainer(IObjectCreationOperation creation)
+        {
+            var parent = creation.Parent;
+            while (parent is IConversionOperation)
+            {
+                parent = parent.Parent;
+            }
+
+            return parent is ISimpleAssignmentOperation { Target: IPropertyReferenceOperation member, Parent: IObjectOrCollectionInitializerOperation }
+                && catalog.Find(member.Property.ContainingType) is { } container
+                && container.NestedMembers.Contains(member.Property.Name);
+        }
+
+        /// <summary>The local, field or property an expression's value is stored in, if any.</summary>
+        private static ISymbol? HolderOf(IOperation creation)
+        {
+            IOperation child = creation;
+            var parent = creation.Parent;
+            while (parent is IConversionOperation or IParenthesizedOperation)
+            {
+                child = parent;
+                parent = parent.Parent;
+            }
+
+            return parent switch
+            {
+                IVariableInitializerOperation { Parent: IVariableDeclaratorOperation declarator } => declarator.Symbol,
+                IFieldInitializerOperation field => field.InitializedFields.FirstOrDefault(),
+                IPropertyInitializerOperation property => property.InitializedProperties.FirstOrDefault(),
+                ISimpleAssignmentOperation assignment when ReferenceEquals(assignment.Value, child) => SymbolOf(assignment.Target),
+                _ => null,
+            };
+        }
+
+        private static ISymbol? SymbolOf(IOperation? operation) => ValueReader.Unwrap(operation) switch
+        {
+            ILocalReferenceOperation local => local.Local,
+            IFieldReferenceOperation field => field.Field,
+            IPropertyReferenceOperation { Property.IsIndexer: false } property => property.Property,
+            IParameterReferenceOperation parameter => parameter.Parameter,
+            _ => null,
+        };
+
+        /// <summary>One options object (or payload) in the block, and what holds it.</summary>
+        private sealed class Instance
+        {
+            public Instance(Request request, IOperation? creation, ISymbol? holder)
+            {
+                Request = request;
+                Creation = creation;
+                Holder = holder;
+            }
+
+            public Request Request { get; }
+            public IOperation? Creation { get; }
+            public ISymbol? Holder { get; }
+            public bool IsPayload { get; set; }
+            public bool PayloadHasModel { get; set; }
+            public bool PayloadHasSamplingKey { get; set; }
+            public bool PayloadSent { get; set; }
+        }
+    }
+}

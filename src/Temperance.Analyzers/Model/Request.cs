@@ -1,0 +1,79 @@
+using System.Collections.Generic;
+using System.Linq;
+using Microsoft.CodeAnalysis;
+
+namespace Temperance.Model
+{
+    /// <summary>
+    /// One model request as the code builds it: which provider, every sampling setting that is written
+    /// (or not), the model id when constant, the response shape and where the request lives.
+    /// Rules read only this; they never walk Roslyn trees.
+    /// </summary>
+    internal sealed class Request
+    {
+        private readonly List<SettingWrite> writes = new List<SettingWrite>();
+
+        public Request(string provider, string surface, Location location, CallContext context, bool originVisible)
+        {
+            Provider = provider;
+            Surface = surface;
+            Location = location;
+            Context = context;
+            OriginVisible = originVisible;
+        }
+
+        /// <summary>Provider key of the rules table (openai, ollama, generic, …).</summary>
+        public string Provider { get; }
+        /// <summary>The type that carries the settings, for messages (<c>ChatCompletionOptions</c>).</summary>
+        public string Surface { get; }
+        /// <summary>The expression that creates the options (or the first write when the creation is not visible).</summary>
+        public Location Location { get; }
+        public CallContext Context { get; }
+        /// <summary>
+        /// True when the creation is visible, so a setting nobody writes is really Unset (provider default).
+        /// False for options that come from a parameter, a helper or a field mutated here: unwritten settings are Unknown.
+        /// </summary>
+        public bool OriginVisible { get; }
+        public string? ModelId { get; set; }
+        public ResponseShape ResponseShape { get; set; }
+        /// <summary>The response-format evidence as written, for messages ("ChatResponseFormat.CreateJsonSchemaFormat").</summary>
+        public string? ResponseShapeEvidence { get; set; }
+        /// <summary>The method the options are passed to, when visible in the same block.</summary>
+        public IMethodSymbol? SendingCall { get; set; }
+        public Location? SendingCallLocation { get; set; }
+
+        public IReadOnlyList<SettingWrite> Writes => writes;
+
+        public void Add(SettingWrite write) => writes.Add(write);
+
+        public void AddRange(IEnumerable<SettingWrite> more) => writes.AddRange(more);
+
+        /// <summary>What the request ends up with for a setting: the last unconditional write wins, in source order.</summary>
+        public ValueKind KindOf(Setting setting, out double value)
+        {
+            value = 0;
+            var last = writes.Where(w => w.Setting == setting).ToList();
+            if (last.Count == 0)
+            {
+                return OriginVisible ? ValueKind.Unset : ValueKind.Unknown;
+            }
+
+            // Conditional branches: the worst (highest) known branch stands for the value; an unknown branch makes it unknown.
+            var tail = last[last.Count - 1];
+            if (!tail.FromConditional)
+            {
+                value = tail.Value;
+                return tail.Kind;
+            }
+
+            var branches = last.Where(w => w.FromConditional && w.Location == tail.Location).ToList();
+            if (branches.Any(b => b.Kind != ValueKind.Known))
+            {
+                return ValueKind.Unknown;
+            }
+
+            value = branches.Max(b => b.Value);
+            return ValueKind.Known;
+        }
+    }
+}

@@ -1,0 +1,58 @@
+namespace Temperance.Model
+{
+    /// <summary>A sampling setting, independent of how an SDK spells it.</summary>
+    internal enum Setting
+    {
+        Temperature,
+        TopP,
+        TopK,
+        MinP,
+        Seed,
+        Candidates,
+        FrequencyPenalty,
+        PresencePenalty,
+        RepetitionPenalty,
+    }
+
+    internal static class SettingNames
+    {
+        /// <summary>The trade name, as used in option keys and messages (top_p, frequency_penalty, …).</summary>
+        public static string KeyName(this Setting setting) => setting switch
+        {
+            Setting.Temperature => "temperature",
+            Setting.TopP => "top_p",
+            Setting.TopK => "top_k",
+            Setting.MinP => "min_p",
+            Setting.Seed => "seed",
+            Setting.Candidates => "candidates",
+            Setting.FrequencyPenalty => "frequency_penalty",
+            Setting.PresencePenalty => "presence_penalty",
+            Setting.RepetitionPenalty => "repetition_penalty",
+            _ => setting.ToString().ToLowerInvariant(),
+        };
+    }
+
+    /// <summary>What a request asks the model to return.</summary>
+    internal enum ResponseShape
+    {
+        /// <summary>Nothing in the code says (plain text or the provider's default).</summary>
+        Unspecified,
+        Text,
+        JsonObject,
+        JsonSchema,
+        /// <summary>Typed structured output such as <c>GetResponseAsync&lt;T&gt;</c>.</summary>
+        Structured,
+        Grammar,
+    }
+
+    /// <summary>How much the analyzer knows about a setting.</summary>
+    internal enum ValueKind
+    {
+        /// <summary>Not written anywhere the analyzer can see: the provider default applies.</summary>
+        Unset,
+        /// <summary>A compile-time number.</summary>
+        Known,
+        /// <summary>Comes from a parameter, configuration or anything else not constant: never judged.</summary>
+        Unknown,
+    }
+}

@@ -1,0 +1,52 @@
+using Microsoft.CodeAnalysis;
+
+namespace Temperance.Model
+{
+    /// <summary>
+    /// One place in code that writes a setting: a member assignment, a bag key or a string-keyed call.
+    /// A conditional value produces one write per branch, each flagged <see cref="FromConditional"/>.
+    /// </summary>
+    internal sealed class SettingWrite
+    {
+        public SettingWrite(Setting setting, ValueKind kind, double value, string member, Location location,
+            SyntaxNode? valueSyntax, NumericKind literalKind, bool fromConditional, string? origin)
+        {
+            Setting = setting;
+            Kind = kind;
+            Value = value;
+            Member = member;
+            Location = location;
+            ValueSyntax = valueSyntax;
+            LiteralKind = literalKind;
+            FromConditional = fromConditional;
+            Origin = origin;
+        }
+
+        public Setting Setting { get; }
+        public ValueKind Kind { get; }
+        /// <summary>Meaningful only when <see cref="Kind"/> is <see cref="ValueKind.Known"/>.</summary>
+        public double Value { get; }
+        /// <summary>How the code spells it: <c>Temperature</c>, <c>"top_k"</c>, <c>NucleusSamplingFactor</c>.</summary>
+        public string Member { get; }
+        /// <summary>The whole assignment or call: where diagnostics about this value go.</summary>
+        public Location Location { get; }
+        /// <summary>The value expression a fix replaces; null when the value came from elsewhere (a constant).</summary>
+        public SyntaxNode? ValueSyntax { get; }
+        /// <summary>The C# type a replacement literal must have.</summary>
+        public NumericKind LiteralKind { get; }
+        public bool FromConditional { get; }
+        /// <summary>Where a known value came from when it is not a literal here ("constant 'Hot'").</summary>
+        public string? Origin { get; }
+    }
+
+    /// <summary>The numeric C# type of a member, so fixes write a literal that compiles.</summary>
+    internal enum NumericKind
+    {
+        Double,
+        Float,
+        Decimal,
+        Int,
+        Long,
+        UInt,
+    }
+}

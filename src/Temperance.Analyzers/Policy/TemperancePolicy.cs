@@ -1,0 +1,171 @@
+using System;
+using System.Collections.Generic;
+using System.Globalization;
+using System.Linq;
+using Microsoft.CodeAnalysis.Diagnostics;
+using Temperance.Model;
+
+namespace Temperance.Policy
+{
+    /// <summary>A bound of the rules table together with the key it came from, so messages can name it.</summary>
+    internal readonly struct Limit
+    {
+        public Limit(double value, string key)
+        {
+            Value = value;
+            Key = key;
+        }
+
+        public double Value { get; }
+        public string Key { get; }
+    }
+
+    /// <summary>A configuration entry that could not be used: reported as SAMP100, and the rule needing it stays silent.</summary>
+    internal sealed class ConfigProblem
+    {
+        public ConfigProblem(string key, string value, string expected)
+        {
+            Key = key;
+            Value = value;
+            Expected = expected;
+        }
+
+        public string Key { get; }
+        public string Value { get; }
+        public string Expected { get; }
+    }
+
+    /// <summary>
+    /// Typed view of the rules table and the team's .editorconfig for one syntax tree. Values are read through
+    /// Roslyn's analyzer-config options only (no file I/O); the tree's options win, the global config is the fallback.
+    /// </summary>
+    internal sealed class TemperancePolicy
+    {
+        private readonly AnalyzerConfigOptions treeOptions;
+        private readonly AnalyzerConfigOptions globalOptions;
+        private readonly Dictionary<string, Limit?> numbers = new Dictionary<string, Limit?>(StringComparer.Ordinal);
+        private readonly List<ConfigProblem> problems = new List<ConfigProblem>();
+        private readonly object gate = new object();
+
+        public TemperancePolicy(AnalyzerConfigOptions treeOptions, AnalyzerConfigOptions globalOptions)
+        {
+            this.treeOptions = treeOptions;
+            this.globalOptions = globalOptions;
+            TaskKind = ReadTaskKind();
+        }
+
+        /// <summary>The task every call in this file has, from <c>temperance.task</c>; null when not set or invalid.</summary>
+        public string? TaskKind { get; }
+
+        /// <summary>Problems found so far; each is reported once per tree by the analyzer.</summary>
+        public IReadOnlyList<ConfigProblem> Problems
+        {
+            get
+            {
+                lock (gate)
+                {
+                    return problems.ToArray();
+                }
+            }
+        }
+
+        public Limit? ExtremeTemperature => Number(OptionKeys.ExtremeTemperature);
+
+        public Limit? Min(string provider, Setting setting) => Number(OptionKeys.ProviderLimit(provider, setting, "min"));
+
+        public Limit? Max(string provider, Setting setting) => Number(OptionKeys.ProviderLimit(provider, setting, "max"));
+
+        public Limit? Default(string provider, Setting setting) => Number(OptionKeys.ProviderLimit(provider, setting, "default"));
+
+        /// <summary>The temperature a fix writes: the task's table value when the task is known, else null.</summary>
+        public Limit? TaskTemperature => TaskKind == null ? null : Number(OptionKeys.TaskTemperature(TaskKind));
+
+        /// <summary>A min above its max: both keys are named so the team sees which pair is wrong.</summary>
+        public void ReportInvertedRange(Limit min, Limit max)
+        {
+            lock (gate)
+            {
+                if (!problems.Exists(p => p.Key == min.Key))
+                {
+                    problems.Add(new ConfigProblem(min.Key, min.Value.ToString(CultureInfo.InvariantCulture),
+                        $"a value no greater than '{max.Key}' ({max.Value.ToString(CultureInfo.InvariantCulture)})"));
+                }
+            }
+        }
+
+        public bool TryGetRaw(string key, out string value)
+        {
+            if (treeOptions.TryGetValue(key, out var local) && local != null)
+            {
+                value = local.Trim();
+                return true;
+            }
+
+            if (globalOptions.TryGetValue(key, out var global) && global != null)
+            {
+                value = global.Trim();
+                return true;
+            }
+
+            value = string.Empty;
+            return false;
+        }
+
+        private Limit? Number(string key)
+        {
+            lock (gate)
+            {
+                if (numbers.TryGetValue(key, out var cached))
+                {
+                    return cached;
+                }
+            }
+
+            Limit? result = null;
+            ConfigProblem? problem = null;
+            if (TryGetRaw(key, out var raw) && raw.Length > 0)
+            {
+                if (double.TryParse(raw, NumberStyles.Float, CultureInfo.InvariantCulture, out var parsed)
+                    && !double.IsNaN(parsed) && !double.IsInfinity(parsed))
+                {
+                    result = new Limit(parsed, key);
+                }
+                else
+                {
+                    problem = new ConfigProblem(key, raw, "a number such as 1.5 (invariant culture, '.' as decimal separator)");
+                }
+            }
+
+            lock (gate)
+            {
+                if (!numbers.ContainsKey(key))
+                {
+                    numbers[key] = result;
+                    if (problem != null)
+                    {
+                        problems.Add(problem);
+                    }
+                }
+            }
+
+            return result;
+        }
+
+        private string? ReadTaskKind()
+        {
+            if (!TryGetRaw(OptionKeys.Task, out var raw) || raw.Length == 0)
+            {
+                return null;
+            }
+
+            var kind = raw.ToLowerInvariant();
+            if (OptionKeys.TaskKinds.Contains(kind))
+            {
+                return kind;
+            }
+
+            problems.Add(new ConfigProblem(OptionKeys.Task, raw, "one of " + string.Join(", ", OptionKeys.TaskKinds)));
+            return null;
+        }
+    }
+}

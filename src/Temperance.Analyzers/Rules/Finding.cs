@@ -1,0 +1,28 @@
+using System.Collections.Immutable;
+using Microsoft.CodeAnalysis;
+
+namespace Temperance.Rules
+{
+    /// <summary>What a rule found, plus the edit a fix should make (carried in diagnostic Properties).</summary>
+    internal sealed class Finding
+    {
+        public Finding(DiagnosticDescriptor descriptor, Location location, ImmutableArray<Location> additionalLocations,
+            ImmutableDictionary<string, string?> properties, params object[] messageArgs)
+        {
+            Descriptor = descriptor;
+            Location = location;
+            AdditionalLocations = additionalLocations;
+            Properties = properties;
+            MessageArgs = messageArgs;
+        }
+
+        public DiagnosticDescriptor Descriptor { get; }
+        public Location Location { get; }
+        public ImmutableArray<Location> AdditionalLocations { get; }
+        public ImmutableDictionary<string, string?> Properties { get; }
+        public object[] MessageArgs { get; }
+
+        public Diagnostic ToDiagnostic() =>
+            Diagnostic.Create(Descriptor, Location, AdditionalLocations, Properties, MessageArgs);
+    }
+}

@@ -1,0 +1,24 @@
+using Temperance.Policy;
+
+namespace Temperance.Rules
+{
+    /// <summary>Values fixes write, taken from the rules table.</summary>
+    internal static class Recommended
+    {
+        /// <summary>Neutral temperature when no task is known: the model's own distribution, unscaled.</summary>
+        public const double NeutralTemperature = 1.0;
+
+        public static Limit Temperature(TemperancePolicy policy) =>
+            policy.TaskTemperature ?? new Limit(NeutralTemperature, "no task known: the model's unscaled distribution");
+    }
+
+    /// <summary>Pieces of messages several rules share.</summary>
+    internal static class Notes
+    {
+        public static string Conditional(Model.SettingWrite write) =>
+            write.FromConditional ? " (one branch of a conditional; the worst branch is judged)" : string.Empty;
+
+        public static string Origin(Model.SettingWrite write) =>
+            write.Origin == null ? string.Empty : $" (from {write.Origin})";
+    }
+}

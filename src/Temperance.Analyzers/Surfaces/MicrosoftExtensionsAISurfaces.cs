@@ -1,0 +1,34 @@
+using Temperance.Model;
+
+namespace Temperance.Surfaces
+{
+    /// <summary>Microsoft.Extensions.AI <c>ChatOptions</c> (also what Microsoft.Agents.AI run options carry).</summary>
+    internal static class MicrosoftExtensionsAISurfaces
+    {
+        public static SurfaceDefinition[] All() => new[]
+        {
+            // Provider-agnostic: the adapter behind IChatClient decides, so ranges are the widest any provider accepts.
+            new SurfaceDefinition("Microsoft.Extensions.AI.ChatOptions", Providers.Generic)
+                {
+                    ModelMember = "ModelId",
+                    ResponseFormatMember = "ResponseFormat",
+                    BagMember = "AdditionalProperties",
+                }
+                .OpenAIShape()
+                .Map("TopK", Setting.TopK)
+                .Map("Seed", Setting.Seed)
+                // Keys adapters read from AdditionalProperties: OllamaSharp's option names, Betalgo's "N".
+                .Key("temperature", Setting.Temperature)
+                .Key("top_p", Setting.TopP)
+                .Key("top_k", Setting.TopK)
+                .Key("min_p", Setting.MinP)
+                .Key("seed", Setting.Seed)
+                .Key("repeat_penalty", Setting.RepetitionPenalty)
+                .Key("N", Setting.Candidates),
+            new SurfaceDefinition("Microsoft.Agents.AI.ChatClientAgentRunOptions", Providers.Generic)
+                .Nested("ChatOptions"),
+            new SurfaceDefinition("Microsoft.Agents.AI.ChatClientAgentOptions", Providers.Generic)
+                .Nested("ChatOptions"),
+        };
+    }
+}

@@ -1,0 +1,22 @@
+using Temperance.Model;
+
+namespace Temperance.Surfaces
+{
+    /// <summary>OllamaSharp: sampling in <c>RequestOptions</c>, model and format on the chat/generate request.</summary>
+    internal static class OllamaSurfaces
+    {
+        public static SurfaceDefinition[] All() => new[]
+        {
+            new SurfaceDefinition("OllamaSharp.Models.RequestOptions", Providers.Ollama)
+                .OpenAIShape()
+                .Map("TopK", Setting.TopK)
+                .Map("MinP", Setting.MinP)
+                .Map("Seed", Setting.Seed)
+                .Map("RepeatPenalty", Setting.RepetitionPenalty),
+            new SurfaceDefinition("OllamaSharp.Models.Chat.ChatRequest", Providers.Ollama) { ModelMember = "Model", ResponseFormatMember = "Format" }
+                .Nested("Options"),
+            new SurfaceDefinition("OllamaSharp.Models.GenerateRequest", Providers.Ollama) { ModelMember = "Model", ResponseFormatMember = "Format" }
+                .Nested("Options"),
+        };
+    }
+}

@@ -1,0 +1,29 @@
+using Temperance.Model;
+
+namespace Temperance.Surfaces
+{
+    /// <summary>OpenAI 2.x (and Azure.AI.OpenAI, which uses the same option types).</summary>
+    internal static class OpenAISurfaces
+    {
+        public static SurfaceDefinition[] All() => new[]
+        {
+            new SurfaceDefinition("OpenAI.Chat.ChatCompletionOptions", Providers.OpenAI) { ResponseFormatMember = "ResponseFormat" }
+                .OpenAIShape()
+                .Map("Seed", Setting.Seed),
+            // Responses API: no seed, no penalties; the model sits on the options.
+            new SurfaceDefinition("OpenAI.Responses.CreateResponseOptions", Providers.OpenAI) { ModelMember = "Model", ResponseFormatMember = "TextOptions" }
+                .Map("Temperature", Setting.Temperature)
+                .Map("TopP", Setting.TopP),
+            // Assistants spell top-p as NucleusSamplingFactor.
+            new SurfaceDefinition("OpenAI.Assistants.AssistantCreationOptions", Providers.OpenAI) { ResponseFormatMember = "ResponseFormat" }
+                .Map("Temperature", Setting.Temperature)
+                .Map("NucleusSamplingFactor", Setting.TopP),
+            new SurfaceDefinition("OpenAI.Assistants.AssistantModificationOptions", Providers.OpenAI) { ResponseFormatMember = "ResponseFormat" }
+                .Map("Temperature", Setting.Temperature)
+                .Map("NucleusSamplingFactor", Setting.TopP),
+            new SurfaceDefinition("OpenAI.Assistants.RunCreationOptions", Providers.OpenAI) { ResponseFormatMember = "ResponseFormat" }
+                .Map("Temperature", Setting.Temperature)
+                .Map("NucleusSamplingFactor", Setting.TopP),
+        };
+    }
+}

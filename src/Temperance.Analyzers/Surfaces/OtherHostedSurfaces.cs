@@ -1,0 +1,24 @@
+using Temperance.Model;
+
+namespace Temperance.Surfaces
+{
+    /// <summary>Azure.AI.Inference, Betalgo.Ranul.OpenAI and Anthropic.</summary>
+    internal static class OtherHostedSurfaces
+    {
+        public static SurfaceDefinition[] All() => new[]
+        {
+            // Azure AI model inference spells top-p NucleusSamplingFactor.
+            new SurfaceDefinition("Azure.AI.Inference.ChatCompletionsOptions", Providers.AzureInference) { ModelMember = "Model", ResponseFormatMember = "ResponseFormat" }
+                .OpenAIShape("NucleusSamplingFactor")
+                .Map("Seed", Setting.Seed),
+            // Betalgo speaks the OpenAI wire format, including n (candidate count).
+            new SurfaceDefinition("Betalgo.Ranul.OpenAI.ObjectModels.RequestModels.ChatCompletionCreateRequest", Providers.OpenAI) { ModelMember = "Model", ResponseFormatMember = "ResponseFormat" }
+                .OpenAIShape()
+                .Map("Seed", Setting.Seed)
+                .Map("N", Setting.Candidates),
+            // Anthropic 13.x has no sampling members; the request is still recognised (model, structured output).
+            new SurfaceDefinition("Anthropic.Models.Messages.MessageCreateParams", Providers.Anthropic) { ModelMember = "Model", ResponseFormatMember = "OutputConfig", HasNoSamplingMembers = true },
+            new SurfaceDefinition("Anthropic.Models.Beta.Messages.MessageCreateParams", Providers.Anthropic) { ModelMember = "Model", ResponseFormatMember = "OutputConfig", HasNoSamplingMembers = true },
+        };
+    }
+}

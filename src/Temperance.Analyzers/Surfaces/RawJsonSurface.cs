@@ -1,0 +1,35 @@
+using System;
+using System.Collections.Generic;
+using Temperance.Model;
+
+namespace Temperance.Surfaces
+{
+    /// <summary>
+    /// Hand-built JSON payloads (anonymous objects, string-keyed dictionaries, JsonObject). Recognised only when they
+    /// carry a "model" key and at least one sampling key, so ordinary dictionaries stay silent.
+    /// </summary>
+    internal static class RawJsonSurface
+    {
+        public const string ModelKey = "model";
+
+        public static readonly IReadOnlyDictionary<string, Setting> Keys = new Dictionary<string, Setting>(StringComparer.Ordinal)
+        {
+            ["temperature"] = Setting.Temperature,
+            ["top_p"] = Setting.TopP,
+            ["top_k"] = Setting.TopK,
+            ["min_p"] = Setting.MinP,
+            ["seed"] = Setting.Seed,
+            ["n"] = Setting.Candidates,
+            ["frequency_penalty"] = Setting.FrequencyPenalty,
+            ["presence_penalty"] = Setting.PresencePenalty,
+            ["repeat_penalty"] = Setting.RepetitionPenalty,
+        };
+
+        /// <summary>Types a payload can be built with (metadata names).</summary>
+        public static readonly string[] PayloadTypes =
+        {
+            "System.Text.Json.Nodes.JsonObject",
+            "System.Collections.Generic.Dictionary`2",
+        };
+    }
+}

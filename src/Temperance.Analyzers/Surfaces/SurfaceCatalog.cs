@@ -1,0 +1,81 @@
+using System.Collections.Generic;
+using System.Linq;
+using Microsoft.CodeAnalysis;
+
+namespace Temperance.Surfaces
+{
+    /// <summary>Every built-in surface, and their symbols resolved once per compilation.</summary>
+    internal sealed class SurfaceCatalog
+    {
+        public static readonly IReadOnlyList<SurfaceDefinition> Definitions =
+            OpenAISurfaces.All()
+            .Concat(MicrosoftExtensionsAISurfaces.All())
+            .Concat(SemanticKernelSurfaces.All())
+            .Concat(OllamaSurfaces.All())
+            .Concat(LocalRuntimeSurfaces.All())
+            .Concat(OtherHostedSurfaces.All())
+            .ToArray();
+
+        private readonly Dictionary<INamedTypeSymbol, SurfaceDefinition> byType;
+
+        private SurfaceCatalog(Dictionary<INamedTypeSymbol, SurfaceDefinition> byType, INamedTypeSymbol? jsonObject, INamedTypeSymbol? dictionary)
+        {
+            this.byType = byType;
+            JsonObjectType = jsonObject;
+            DictionaryType = dictionary;
+        }
+
+        public bool HasSdkSurfaces => byType.Count > 0;
+        public INamedTypeSymbol? JsonObjectType { get; }
+        public INamedTypeSymbol? DictionaryType { get; }
+
+        public static SurfaceCatalog Resolve(Compilation compilation)
+        {
+            var byType = new Dictionary<INamedTypeSymbol, SurfaceDefinition>(SymbolEqualityComparer.Default);
+            foreach (var definition in Definitions)
+            {
+                if (compilation.GetTypeByMetadataName(definition.MetadataName) is { } type)
+                {
+                    byType[type] = definition;
+                }
+            }
+
+            return new SurfaceCatalog(
+                byType,
+                compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[0]),
+                compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[1]));
+        }
+
+        /// <summary>The surface of a type or of its nearest base type that is one (user subclasses, Azure SK settings).</summary>
+        public SurfaceDefinition? Find(ITypeSymbol? type)
+        {
+            for (var current = type as INamedTypeSymbol; current != null; current = current.BaseType)
+            {
+                if (byType.TryGetValue(current.OriginalDefinition, out var definition))
+                {
+                    return definition;
+                }
+            }
+
+            return null;
+        }
+
+        /// <summary>A string-keyed dictionary or JsonObject that could be a hand-built payload.</summary>
+        public bool IsPayloadType(ITypeSymbol? type)
+        {
+            if (type is not INamedTypeSymbol named)
+            {
+                return false;
+            }
+
+            if (JsonObjectType != null && SymbolEqualityComparer.Default.Equals(named, JsonObjectType))
+            {
+                return true;
+            }
+
+            return DictionaryType != null
+                && SymbolEqualityComparer.Default.Equals(named.OriginalDefinition, DictionaryType)
+                && named.TypeArguments[0].SpecialType == SpecialType.System_String;
+        }
+    }
+}

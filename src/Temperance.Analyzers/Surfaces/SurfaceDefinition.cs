@@ -1,0 +1,84 @@
+using System;
+using System.Collections.Generic;
+using Temperance.Model;
+
+namespace Temperance.Surfaces
+{
+    /// <summary>
+    /// Declares, for one SDK options type, which members carry which setting. Pure data: the extraction
+    /// pass reads it, nothing here touches Roslyn.
+    /// </summary>
+    internal sealed class SurfaceDefinition
+    {
+        public SurfaceDefinition(string metadataName, string provider)
+        {
+            MetadataName = metadataName;
+            Provider = provider;
+        }
+
+        /// <summary>Full metadata name, as <c>Compilation.GetTypeByMetadataName</c> takes it.</summary>
+        public string MetadataName { get; }
+        /// <summary>Provider key in the rules table.</summary>
+        public string Provider { get; }
+        public string ShortName => MetadataName.Substring(MetadataName.LastIndexOf('.') + 1);
+
+        /// <summary>Typed members: member name to setting.</summary>
+        public Dictionary<string, Setting> Members { get; } = new Dictionary<string, Setting>(StringComparer.Ordinal);
+        /// <summary>The member holding the model id, if the type has one.</summary>
+        public string? ModelMember { get; set; }
+        /// <summary>The member whose value says what shape of response is wanted.</summary>
+        public string? ResponseFormatMember { get; set; }
+        /// <summary>Members whose value is another surface (Ollama <c>Options</c>, LLamaSharp <c>SamplingPipeline</c>).</summary>
+        public List<string> NestedMembers { get; } = new List<string>();
+        /// <summary>A string-keyed dictionary member (<c>ExtensionData</c>, <c>AdditionalProperties</c>).</summary>
+        public string? BagMember { get; set; }
+        /// <summary>Keys of <see cref="BagMember"/> (or of a keyed method) that carry settings; case-insensitive.</summary>
+        public Dictionary<string, Setting> Keys { get; } = new Dictionary<string, Setting>(StringComparer.OrdinalIgnoreCase);
+        /// <summary>A method that sets a setting by string key: <c>SetSearchOption("temperature", 0.2)</c>.</summary>
+        public string? KeyedMethod { get; set; }
+        /// <summary>A method whose call fixes the response shape (<c>SetGuidance</c>).</summary>
+        public string? ShapeMethod { get; set; }
+        /// <summary>True for the member-less request types (Anthropic 13.x has no sampling members at all).</summary>
+        public bool HasNoSamplingMembers { get; set; }
+
+        public SurfaceDefinition Map(string member, Setting setting)
+        {
+            Members[member] = setting;
+            return this;
+        }
+
+        public SurfaceDefinition Key(string key, Setting setting)
+        {
+            Keys[key] = setting;
+            return this;
+        }
+
+        public SurfaceDefinition Nested(string member)
+        {
+            NestedMembers.Add(member);
+            return this;
+        }
+
+        /// <summary>The members most OpenAI-shaped SDKs share.</summary>
+        public SurfaceDefinition OpenAIShape(string topPMember = "TopP") =>
+            Map("Temperature", Setting.Temperature)
+            .Map(topPMember, Setting.TopP)
+            .Map("FrequencyPenalty", Setting.FrequencyPenalty)
+            .Map("PresencePenalty", Setting.PresencePenalty);
+    }
+
+    /// <summary>Provider keys of the rules table.</summary>
+    internal static class Providers
+    {
+        public const string OpenAI = "openai";
+        public const string AzureInference = "azure_inference";
+        public const string Ollama = "ollama";
+        public const string LLamaSharp = "llamasharp";
+        public const string OnnxGenAI = "onnx_genai";
+        public const string Anthropic = "anthropic";
+        /// <summary>Provider-agnostic surfaces (M.E.AI ChatOptions, SK base settings, raw JSON): the widest range any provider accepts.</summary>
+        public const string Generic = "generic";
+
+        public static readonly string[] All = { OpenAI, AzureInference, Ollama, LLamaSharp, OnnxGenAI, Anthropic, Generic };
+    }
+}

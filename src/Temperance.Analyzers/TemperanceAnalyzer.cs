@@ -1,0 +1,121 @@
+using System.Collections.Concurrent;
+using System.Collections.Generic;
+using System.Collections.Immutable;
+using System.Linq;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Diagnostics;
+using Microsoft.CodeAnalysis.Operations;
+using Temperance.Extraction;
+using Temperance.Model;
+using Temperance.Policy;
+using Temperance.Rules;
+using Temperance.Surfaces;
+
+namespace Temperance
+{
+    /// <summary>
+    /// The one analyzer. Per compilation: resolve the surfaces once. Per operation block: collect the few operations
+    /// that touch options, build requests once, and let every rule look at them.
+    /// </summary>
+    [DiagnosticAnalyzer(LanguageNames.CSharp)]
+    public sealed class TemperanceAnalyzer : DiagnosticAnalyzer
+    {
+        public override ImmutableArray<DiagnosticDescriptor> SupportedDiagnostics => Descriptors.All;
+
+        public override void Initialize(AnalysisContext context)
+        {
+            context.EnableConcurrentExecution();
+            context.ConfigureGeneratedCodeAnalysis(GeneratedCodeAnalysisFlags.None);
+            context.RegisterCompilationStartAction(OnCompilationStart);
+        }
+
+        private static void OnCompilationStart(CompilationStartAnalysisContext context)
+        {
+            var catalog = SurfaceCatalog.Resolve(context.Compilation);
+            if (!catalog.HasSdkSurfaces && catalog.JsonObjectType == null && catalog.DictionaryType == null)
+            {
+                return; // nothing to look for: zero cost
+            }
+
+            var tests = TestFrameworks.Resolve(context.Compilation);
+            var policies = new ConcurrentDictionary<SyntaxTree, TreeState>();
+            var options = context.Options.AnalyzerConfigOptionsProvider;
+
+            context.RegisterOperationBlockStartAction(block =>
+            {
+                var collector = new BlockCollector(catalog);
+                block.RegisterOperationAction(c => collector.OnObjectCreation((IObjectCreationOperation)c.Operation), OperationKind.ObjectCreation);
+                block.RegisterOperationAction(c => collector.OnAnonymousObjectCreation((IAnonymousObjectCreationOperation)c.Operation), OperationKind.AnonymousObjectCreation);
+                block.RegisterOperationAction(c => collector.OnWith((IWithOperation)c.Operation), OperationKind.With);
+                block.RegisterOperationAction(c => collector.OnAssignment((ISimpleAssignmentOperation)c.Operation), OperationKind.SimpleAssignment);
+                block.RegisterOperationAction(c => collector.OnInvocation((IInvocationOperation)c.Operation), OperationKind.Invocation);
+                block.RegisterOperationBlockEndAction(end =>
+                {
+                    if (collector.IsEmpty)
+                    {
+                        return;
+                    }
+
+                    var owner = end.OwningSymbol;
+                    var callContext = new CallContext(owner, owner.ContainingType, tests.IsTest(owner));
+                    var requests = RequestBuilder.Build(catalog, callContext, collector);
+                    if (requests.Count == 0)
+                    {
+                        return;
+                    }
+
+                    var tree = requests[0].Location.SourceTree;
+                    if (tree == null)
+                    {
+                        return;
+                    }
+
+                    var state = policies.GetOrAdd(tree, t => new TreeState(new TemperancePolicy(options.GetOptions(t), options.GlobalOptions)));
+                    Judge(requests, state, end.ReportDiagnostic);
+                });
+            });
+        }
+
+        private static void Judge(IReadOnlyList<Request> requests, TreeState state, System.Action<Diagnostic> report)
+        {
+            var reported = new HashSet<(string, Location)>();
+            foreach (var request in requests)
+            {
+                foreach (var rule in Rules.RuleSet.All)
+                {
+                    foreach (var finding in rule(request, state.Policy))
+                    {
+                        // Clone and with inherit writes; a location is judged once.
+                        if (reported.Add((finding.Descriptor.Id, finding.Location)))
+                        {
+                            report(finding.ToDiagnostic());
+                        }
+                    }
+                }
+
+                foreach (var problem in state.Policy.Problems)
+                {
+                    if (state.FirstReport(problem.Key))
+                    {
+                        report(Diagnostic.Create(Descriptors.InvalidConfiguration, request.Location, problem.Key, problem.Value, problem.Expected));
+                    }
+                }
+            }
+        }
+
+        /// <summary>Policy of one tree, plus which configuration problems were already reported in it.</summary>
+        private sealed class TreeState
+        {
+            private readonly ConcurrentDictionary<string, bool> reportedProblems = new ConcurrentDictionary<string, bool>();
+
+            public TreeState(TemperancePolicy policy)
+            {
+                Policy = policy;
+            }
+
+            public TemperancePolicy Policy { get; }
+
+            public bool FirstReport(string key) => reportedProblems.TryAdd(key, true);
+        }
+    }
+}

@@ -1,0 +1,63 @@
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.CSharp;
+using Microsoft.CodeAnalysis.CSharp.Testing;
+using Microsoft.CodeAnalysis.Testing;
+using Temperance.CodeFixes;
+
+namespace Temperance.Tests.Infrastructure;
+
+/// <summary>Analyzer + fixer test against the real SDKs, with the shipped rules table as the global config.</summary>
+public sealed class TemperanceTest : CSharpCodeFixTest<TemperanceAnalyzer, TemperanceCodeFixProvider, DefaultVerifier>
+{
+    /// <summary>Experimental-API diagnostics of the SDKs (errors by default); snippets are about sampling, not those.</summary>
+    private static readonly string[] SdkExperimentalIds = { "OPENAI001", "SCME0001", "SCME0002", "SKEXP0001", "SKEXP0010", "MEAI001", "AOAI001" };
+
+    public TemperanceTest(string source, string? editorConfig = null, string? fixedSource = null)
+    {
+        ReferenceAssemblies = new ReferenceAssemblies("net10.0");
+        TestState.AdditionalReferences.AddRange(TestReferences.All);
+        TestState.Sources.Add(source);
+        TestState.AnalyzerConfigFiles.Add(("/.globalconfig", TestReferences.RulesTable));
+        if (editorConfig != null)
+        {
+            TestState.AnalyzerConfigFiles.Add(("/.editorconfig", "root = true\n\n[*.cs]\n" + editorConfig));
+        }
+
+        if (fixedSource != null)
+        {
+            FixedState.Sources.Add(fixedSource);
+        }
+
+        SolutionTransforms.Add((solution, projectId) =>
+        {
+            var project = solution.GetProject(projectId)!;
+            var options = (CSharpCompilationOptions)project.CompilationOptions!;
+            options = options
+                .WithNullableContextOptions(NullableContextOptions.Enable)
+                .WithSpecificDiagnosticOptions(options.SpecificDiagnosticOptions.SetItems(
+                    SdkExperimentalIds.Select(id => new KeyValuePair<string, ReportDiagnostic>(id, ReportDiagnostic.Suppress))));
+            return solution.WithProjectCompilationOptions(projectId, options);
+        });
+    }
+}
+
+/// <summary>Short entry points, in the style of the Microsoft.CodeAnalysis.Testing verifiers.</summary>
+public static class Verify
+{
+    public static DiagnosticResult Diagnostic(string id) => new DiagnosticResult(id, id == "SAMP006" ? DiagnosticSeverity.Info : DiagnosticSeverity.Warning);
+
+    public static Task AnalyzerAsync(string source, params DiagnosticResult[] expected) => AnalyzerAsync(source, null, expected);
+
+    public static Task AnalyzerAsync(string source, string? editorConfig, params DiagnosticResult[] expected)
+    {
+        var test = new TemperanceTest(source, editorConfig);
+        test.ExpectedDiagnostics.AddRange(expected);
+        return test.RunAsync();
+    }
+
+    public static Task FixAsync(string source, string fixedSource, string? editorConfig = null)
+    {
+        var test = new TemperanceTest(source, editorConfig, fixedSource);
+        return test.RunAsync();
+    }
+}
