@@ -28,16 +28,9 @@ public sealed class TemperanceTest : CSharpCodeFixTest<TemperanceAnalyzer, Tempe
             FixedState.Sources.Add(fixedSource);
         }
 
-        SolutionTransforms.Add((solution, projectId) =>
-        {
-            var project = solution.GetProject(projectId)!;
-            var options = (CSharpCompilationOptions)project.CompilationOptions!;
-            options = options
-                .WithNullableContextOptions(NullableContextOptions.Enable)
-                .WithSpecificDiagnosticOptions(options.SpecificDiagnosticOptions.SetItems(
-                    SdkExperimentalIds.Select(id => new KeyValuePair<string, ReportDiagnostic>(id, ReportDiagnostic.Suppress))));
-            return solution.WithProjectCompilationOptions(projectId, options);
-        });
+        // Through a global config rather than compilation options, so per-file severities from .editorconfig still apply.
+        TestState.AnalyzerConfigFiles.Add(("/.sdk-experimental.globalconfig",
+            "is_global = true\n" + string.Concat(SdkExperimentalIds.Select(id => $"dotnet_diagnostic.{id}.severity = none\n"))));
     }
 }
 
