@@ -58,7 +58,7 @@ namespace Temperance
 
                     var owner = end.OwningSymbol;
                     var callContext = new CallContext(owner, owner.ContainingType, tests.IsTest(owner));
-                    var requests = RequestBuilder.Build(catalog, callContext, collector);
+                    var requests = RequestBuilder.Build(catalog, callContext, collector, end.OperationBlocks);
                     if (requests.Count == 0)
                     {
                         return;

@@ -9,20 +9,23 @@ using Microsoft.CodeAnalysis.CodeActions;
 using Microsoft.CodeAnalysis.CodeFixes;
 using Microsoft.CodeAnalysis.CSharp;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
+using Microsoft.CodeAnalysis.Formatting;
+using Microsoft.CodeAnalysis.Simplification;
 using Temperance.Model;
 using Temperance.Rules;
 
 namespace Temperance.CodeFixes
 {
     /// <summary>
-    /// The one fixer. Rules describe the edit in diagnostic Properties (see <see cref="FixProperties"/>); this provider
-    /// only applies generic edits, so a new rule with a known edit needs no new fixer.
+    /// The one fixer. Rules describe numbered edits in diagnostic Properties (see <see cref="FixProperties"/>); this
+    /// provider applies three generic edits, so a new rule with a known edit needs no new fixer.
     /// </summary>
     [ExportCodeFixProvider(LanguageNames.CSharp, Name = nameof(TemperanceCodeFixProvider)), Shared]
     public sealed class TemperanceCodeFixProvider : CodeFixProvider
     {
-        public override ImmutableArray<string> FixableDiagnosticIds { get; } =
-            ImmutableArray.Create(Descriptors.ValueOutOfRange.Id, Descriptors.ExtremeTemperature.Id);
+        public override ImmutableArray<string> FixableDiagnosticIds { get; } = ImmutableArray.Create(
+            Descriptors.ValueOutOfRange.Id, Descriptors.ExtremeTemperature.Id,
+            Descriptors.TemperatureAboveTaskCeiling.Id, Descriptors.CandidatesAtTemperatureZero.Id);
 
         public override FixAllProvider GetFixAllProvider() => WellKnownFixAllProviders.BatchFixer;
 
@@ -30,24 +33,27 @@ namespace Temperance.CodeFixes
         {
             foreach (var diagnostic in context.Diagnostics)
             {
-                if (!diagnostic.Properties.TryGetValue(FixProperties.Edit, out var edit) || edit != FixProperties.SetValue
-                    || diagnostic.AdditionalLocations.Count == 0
-                    || !TryGetLiteral(diagnostic, out var literal))
+                if (!diagnostic.Properties.TryGetValue(FixProperties.EditCount, out var countText)
+                    || !int.TryParse(countText, NumberStyles.Integer, CultureInfo.InvariantCulture, out var count))
                 {
                     continue;
                 }
 
-                diagnostic.Properties.TryGetValue(FixProperties.Member, out var member);
-                var title = $"Set {member} to {literal}";
-                context.RegisterCodeFix(
-                    CodeAction.Create(title, ct => SetValueAsync(context.Document, diagnostic, literal, ct), FixProperties.SetValueKey(diagnostic.Id)),
-                    diagnostic);
+                for (var index = 0; index < count && index < diagnostic.AdditionalLocations.Count; index++)
+                {
+                    if (Edit.TryRead(diagnostic, index, out var edit))
+                    {
+                        context.RegisterCodeFix(
+                            CodeAction.Create(edit.Title, ct => ApplyAsync(context.Document, edit, ct), FixProperties.Key(diagnostic.Id, edit.Kind, index)),
+                            diagnostic);
+                    }
+                }
             }
 
             return Task.CompletedTask;
         }
 
-        private static async Task<Document> SetValueAsync(Document document, Diagnostic diagnostic, string literal, CancellationToken cancellationToken)
+        private static async Task<Document> ApplyAsync(Document document, Edit edit, CancellationToken cancellationToken)
         {
             var root = await document.GetSyntaxRootAsync(cancellationToken).ConfigureAwait(false);
             if (root == null)
@@ -55,49 +61,176 @@ namespace Temperance.CodeFixes
                 return document;
             }
 
-            var span = diagnostic.AdditionalLocations[0].SourceSpan;
-            if (root.FindNode(span, getInnermostNodeForTie: true) is not ExpressionSyntax value)
+            var node = root.FindNode(edit.Span, getInnermostNodeForTie: true);
+            // The outermost expression with exactly the span (an argument or parenthesis around it is not the value).
+            while (node.Parent is ExpressionSyntax && node.Parent.Span == edit.Span)
             {
-                return document;
+                node = node.Parent;
             }
 
-            // Walk up to the node that spans exactly the value (FindNode may return an inner token's node).
-            while (value.Parent is ExpressionSyntax parent && parent.Span == span)
+            var replaced = edit.Kind switch
             {
-                value = parent;
-            }
-
-            // Keep the comments and spacing around the old value.
-            var replacement = SyntaxFactory.ParseExpression(literal).WithTriviaFrom(value);
-            return document.WithSyntaxRoot(root.ReplaceNode(value, replacement));
+                FixProperties.SetValue when node is ExpressionSyntax value =>
+                    root.ReplaceNode(value, SyntaxFactory.ParseExpression(edit.Literal).WithTriviaFrom(value)),
+                FixProperties.AddMember when FindCreation(node) is { } creation =>
+                    root.ReplaceNode(creation, AddMember(creation, edit)),
+                FixProperties.AddArgument when node.DescendantNodesAndSelf().OfType<InvocationExpressionSyntax>().FirstOrDefault() is { } call =>
+                    root.ReplaceNode(call, AddArgument(call, edit)),
+                _ => root,
+            };
+            return document.WithSyntaxRoot(replaced);
         }
 
-        /// <summary>A C# literal of the member's own type, so the fixed code compiles: 0.7f, 0.7, 0.7m, 1, 1L, 1u.</summary>
-        internal static bool TryGetLiteral(Diagnostic diagnostic, out string literal)
+        private static BaseObjectCreationExpressionSyntax? FindCreation(SyntaxNode node) =>
+            node as BaseObjectCreationExpressionSyntax ?? node.DescendantNodesAndSelf().OfType<BaseObjectCreationExpressionSyntax>().FirstOrDefault();
+
+        /// <summary><c>new X { A = 1 }</c> becomes <c>new X { A = 1, Temperature = 0.0f }</c>; a wrapper adds <c>Options = new T { … }</c>.</summary>
+        private static SyntaxNode AddMember(BaseObjectCreationExpressionSyntax creation, Edit edit)
         {
-            literal = string.Empty;
-            if (!diagnostic.Properties.TryGetValue(FixProperties.Value, out var text)
-                || !double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value)
-                || !diagnostic.Properties.TryGetValue(FixProperties.NumericKind, out var kindText)
-                || !System.Enum.TryParse<NumericKind>(kindText, out var kind))
+            ExpressionSyntax assignment = Assign(edit.Member, SyntaxFactory.ParseExpression(edit.Literal));
+            if (edit.Wrapper != null && edit.TypeName != null)
             {
-                return false;
+                assignment = Assign(edit.Wrapper, NewWithMember(edit.TypeName, edit.Member, edit.Literal));
             }
 
+            var initializer = creation.Initializer;
+            if (initializer == null)
+            {
+                var fresh = SyntaxFactory.InitializerExpression(SyntaxKind.ObjectInitializerExpression, SyntaxFactory.SingletonSeparatedList(assignment));
+                // new X() { … } reads oddly; drop an empty argument list of an explicit creation.
+                if (creation is ObjectCreationExpressionSyntax { ArgumentList.Arguments.Count: 0 } explicitCreation)
+                {
+                    return explicitCreation.WithArgumentList(null).WithType(explicitCreation.Type.WithTrailingTrivia(SyntaxFactory.Space))
+                        .WithInitializer(fresh).WithAdditionalAnnotations(Formatter.Annotation);
+                }
+
+                return creation.WithInitializer(fresh).WithAdditionalAnnotations(Formatter.Annotation);
+            }
+
+            var expressions = initializer.Expressions;
+            var multiline = initializer.OpenBraceToken.GetLocation().GetLineSpan().StartLinePosition.Line
+                != initializer.CloseBraceToken.GetLocation().GetLineSpan().StartLinePosition.Line;
+            if (multiline && expressions.Count > 0)
+            {
+                // Keep one member per line: copy the indentation of the existing members.
+                var indentation = expressions[0].GetLeadingTrivia();
+                var separators = expressions.GetSeparators().ToList();
+                var items = expressions.ToList();
+                var trailingComma = separators.Count == items.Count;
+                var lastSeparator = trailingComma ? separators[separators.Count - 1] : SyntaxFactory.Token(SyntaxKind.CommaToken).WithTrailingTrivia(SyntaxFactory.ElasticCarriageReturnLineFeed);
+                if (!trailingComma)
+                {
+                    items[items.Count - 1] = items[items.Count - 1].WithoutTrailingTrivia();
+                    separators.Add(lastSeparator.WithTrailingTrivia(expressions[expressions.Count - 1].GetTrailingTrivia().Add(SyntaxFactory.ElasticCarriageReturnLineFeed)));
+                }
+
+                items.Add(assignment.WithLeadingTrivia(indentation));
+                if (trailingComma)
+                {
+                    separators.Add(SyntaxFactory.Token(SyntaxKind.CommaToken).WithTrailingTrivia(lastSeparator.TrailingTrivia));
+                }
+                else
+                {
+                    items[items.Count - 1] = items[items.Count - 1].WithTrailingTrivia(SyntaxFactory.ElasticCarriageReturnLineFeed);
+                }
+
+                var list = SyntaxFactory.SeparatedList(items, separators);
+                return creation.WithInitializer(initializer.WithExpressions(list));
+            }
+
+            return creation.WithInitializer(initializer.WithExpressions(expressions.Add(assignment.WithAdditionalAnnotations(Formatter.Annotation))))
+                .WithAdditionalAnnotations(Formatter.Annotation);
+        }
+
+        /// <summary><c>client.Send(x)</c> becomes <c>client.Send(x, options: new Options { Temperature = 0.0f })</c>.</summary>
+        private static SyntaxNode AddArgument(InvocationExpressionSyntax call, Edit edit)
+        {
+            var argument = SyntaxFactory.Argument(NewWithMember(edit.TypeName!, edit.Member, edit.Literal))
+                .WithNameColon(SyntaxFactory.NameColon(SyntaxFactory.IdentifierName(edit.Parameter!)));
+            return call.WithArgumentList(call.ArgumentList.AddArguments(argument)).WithAdditionalAnnotations(Formatter.Annotation);
+        }
+
+        private static ExpressionSyntax NewWithMember(string typeName, string member, string literal) =>
+            SyntaxFactory.ObjectCreationExpression(SyntaxFactory.ParseTypeName(typeName).WithAdditionalAnnotations(Simplifier.Annotation).WithTrailingTrivia(SyntaxFactory.Space))
+                .WithInitializer(SyntaxFactory.InitializerExpression(
+                    SyntaxKind.ObjectInitializerExpression,
+                    SyntaxFactory.SingletonSeparatedList<ExpressionSyntax>(Assign(member, SyntaxFactory.ParseExpression(literal)))))
+                .WithAdditionalAnnotations(Formatter.Annotation);
+
+        private static AssignmentExpressionSyntax Assign(string member, ExpressionSyntax value) =>
+            SyntaxFactory.AssignmentExpression(SyntaxKind.SimpleAssignmentExpression, SyntaxFactory.IdentifierName(member), value);
+
+        /// <summary>A C# literal of the member's own type, so the fixed code compiles: 0.7f, 0.7, 0.7m, 1, 1L, 1u.</summary>
+        internal static bool TryFormat(double value, NumericKind kind, out string literal)
+        {
             var fractional = value.ToString("0.0###", CultureInfo.InvariantCulture);
             var whole = System.Math.Round(value).ToString("0", CultureInfo.InvariantCulture);
-            var negative = value < 0;
             literal = kind switch
             {
                 NumericKind.Float => fractional + "f",
                 NumericKind.Decimal => fractional + "m",
                 NumericKind.Int => whole,
                 NumericKind.Long => whole + "L",
-                NumericKind.UInt when !negative => whole + "u",
+                NumericKind.UInt when value >= 0 => whole + "u",
                 NumericKind.UInt => string.Empty,
                 _ => fractional,
             };
             return literal.Length > 0;
+        }
+
+        /// <summary>One numbered edit read back from a diagnostic.</summary>
+        private sealed class Edit
+        {
+            public string Kind { get; private set; } = string.Empty;
+            public Microsoft.CodeAnalysis.Text.TextSpan Span { get; private set; }
+            public string Literal { get; private set; } = string.Empty;
+            public string Member { get; private set; } = string.Empty;
+            public string? Wrapper { get; private set; }
+            public string? TypeName { get; private set; }
+            public string? Parameter { get; private set; }
+
+            public string Title => Kind switch
+            {
+                FixProperties.AddMember => $"Add {Member} = {Literal}",
+                FixProperties.AddArgument => $"Pass options with {Member} = {Literal}",
+                _ => $"Set {Member} to {Literal}",
+            };
+
+            public static bool TryRead(Diagnostic diagnostic, int index, out Edit edit)
+            {
+                edit = new Edit();
+                var properties = diagnostic.Properties;
+                if (!properties.TryGetValue(FixProperties.Edit(index), out var kind) || kind == null
+                    || !properties.TryGetValue(FixProperties.Value(index), out var valueText)
+                    || !double.TryParse(valueText, NumberStyles.Float, CultureInfo.InvariantCulture, out var value)
+                    || !properties.TryGetValue(FixProperties.NumericKind(index), out var kindText)
+                    || !System.Enum.TryParse<NumericKind>(kindText, out var numericKind)
+                    || !TryFormat(value, numericKind, out var literal))
+                {
+                    return false;
+                }
+
+                properties.TryGetValue(FixProperties.Member(index), out var member);
+                properties.TryGetValue(FixProperties.Wrapper(index), out var wrapper);
+                properties.TryGetValue(FixProperties.TypeName(index), out var typeName);
+                properties.TryGetValue(FixProperties.Parameter(index), out var parameter);
+                if (kind == FixProperties.AddArgument && (parameter == null || typeName == null))
+                {
+                    return false;
+                }
+
+                edit = new Edit
+                {
+                    Kind = kind,
+                    Span = diagnostic.AdditionalLocations[index].SourceSpan,
+                    Literal = literal,
+                    Member = member ?? string.Empty,
+                    Wrapper = wrapper,
+                    TypeName = typeName,
+                    Parameter = parameter,
+                };
+                return true;
+            }
         }
     }
 }

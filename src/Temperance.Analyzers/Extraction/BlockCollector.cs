@@ -106,6 +106,11 @@ namespace Temperance.Extraction
                     return;
                 }
             }
+
+            if (catalog.SurfaceSentBy(method) != null)
+            {
+                Add(Invocations, invocation);
+            }
         }
 
         /// <summary>Methods that send or serialise a hand-built JSON payload.</summary>

@@ -19,15 +19,18 @@ namespace Temperance.Extraction
         private readonly CallContext context;
         private readonly List<Instance> instances = new List<Instance>();
 
-        private RequestBuilder(SurfaceCatalog catalog, CallContext context)
+        private readonly IReadOnlyList<IOperation> blocks;
+
+        private RequestBuilder(SurfaceCatalog catalog, CallContext context, IReadOnlyList<IOperation> blocks)
         {
             this.catalog = catalog;
             this.context = context;
+            this.blocks = blocks;
         }
 
-        public static IReadOnlyList<Request> Build(SurfaceCatalog catalog, CallContext context, BlockCollector collected)
+        public static IReadOnlyList<Request> Build(SurfaceCatalog catalog, CallContext context, BlockCollector collected, IReadOnlyList<IOperation> blocks)
         {
-            var builder = new RequestBuilder(catalog, context);
+            var builder = new RequestBuilder(catalog, context, blocks);
             var clones = collected.Invocations.Where(builder.IsClone).Cast<IOperation>();
             foreach (var creation in collected.Creations.Concat(clones).OrderBy(c => c.Syntax.SpanStart))
             {
@@ -44,10 +47,29 @@ namespace Temperance.Extraction
                 builder.AddInvocation(invocation);
             }
 
-            return builder.instances
+            var requests = builder.instances
                 .Where(i => !i.IsPayload || (i.PayloadHasSamplingKey && i.PayloadHasModel && i.PayloadSent))
-                .Select(i => i.Request)
                 .ToList();
+            if (requests.Count == 0)
+            {
+                return System.Array.Empty<Request>();
+            }
+
+            // Task signals are read once per block and shared by its requests; names differ per holder.
+            var annotation = TaskSignalReader.Annotation(context.Member);
+            var prompts = TaskSignalReader.FromPrompts(blocks).ToList();
+            foreach (var instance in requests)
+            {
+                if (annotation != null)
+                {
+                    instance.Request.TaskSignals.Add(annotation);
+                }
+
+                instance.Request.TaskSignals.AddRange(TaskSignalReader.FromNames(context.Member, instance.Holder));
+                instance.Request.TaskSignals.AddRange(prompts);
+            }
+
+            return requests.Select(i => i.Request).ToList();
         }
 
         private void AddCreation(IOperation creation)
@@ -62,6 +84,7 @@ namespace Temperance.Extraction
 
                     var request = NewRequest(surface, creation, originVisible: true);
                     ReadInitializer(surface, objectCreation.Initializer, request);
+                    request.TemperatureTarget ??= TemperatureTargetOf(objectCreation, surface);
                     Track(new Instance(request, creation, HolderOf(creation)));
                     return;
 
@@ -159,6 +182,7 @@ namespace Temperance.Extraction
             }
 
             var serialises = BlockCollector.IsSerialisation(method);
+            AddImplicitRequest(invocation);
             foreach (var operand in Operands(invocation))
             {
                 var instance = InstanceOf(operand, invocation.Syntax.SpanStart);
@@ -173,10 +197,11 @@ namespace Temperance.Extraction
                     continue;
                 }
 
-                if (instance.Request.SendingCall == null)
+                if (instance.Request.SendingCall == null && !ReferenceEquals(operand, invocation.Instance))
                 {
                     instance.Request.SendingCall = method;
                     instance.Request.SendingCallLocation = invocation.Syntax.GetLocation();
+                    instance.Request.ClientModelId = ClientModel(Receiver(invocation), 0);
                     if (method.IsGenericMethod && method.TypeArguments.Length == 1 && instance.Request.ResponseShape is ResponseShape.Unspecified or ResponseShape.Text)
                     {
                         instance.Request.ResponseShape = ResponseShape.Structured;
@@ -184,6 +209,249 @@ namespace Temperance.Extraction
                     }
                 }
             }
+        }
+
+        /// <summary>
+        /// A send that passes no options (<c>client.GetResponseAsync(prompt)</c>, <c>chat.CompleteChat(message)</c>):
+        /// a request whose settings are all Unset, located at the call.
+        /// </summary>
+        private void AddImplicitRequest(IInvocationOperation invocation)
+        {
+            SurfaceDefinition? surface = null;
+            IParameterSymbol? omitted = null;
+            foreach (var argument in invocation.Arguments)
+            {
+                if (argument.Parameter != null && catalog.Find(argument.Parameter.Type) is { } parameterSurface)
+                {
+                    if (argument.ArgumentKind != ArgumentKind.DefaultValue && ValueReader.Unwrap(argument.Value)?.ConstantValue is not { HasValue: true, Value: null })
+                    {
+                        return; // options are passed: the request is that object
+                    }
+
+                    surface = parameterSurface;
+                    omitted = argument.Parameter;
+                }
+            }
+
+            surface ??= catalog.SurfaceSentBy(invocation.TargetMethod);
+            if (surface == null)
+            {
+                return;
+            }
+
+            var request = new Request(surface.Provider, surface.ShortName, invocation.Syntax.GetLocation(), context, originVisible: true)
+            {
+                IsImplicit = true,
+                OmittedParameter = omitted,
+                SendingCall = invocation.TargetMethod,
+                SendingCallLocation = invocation.Syntax.GetLocation(),
+            };
+            if (omitted?.Type is INamedTypeSymbol optionsType)
+            {
+                var concrete = optionsType.OriginalDefinition.SpecialType == SpecialType.System_Nullable_T ? (INamedTypeSymbol)optionsType.TypeArguments[0] : optionsType;
+                if (concrete.TypeKind == TypeKind.Class && !concrete.IsAbstract && TemperatureMember(concrete, surface) is { } member)
+                {
+                    request.OmittedOptionsType = concrete.WithNullableAnnotation(NullableAnnotation.NotAnnotated).ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat);
+                    request.OmittedTemperatureMember = member.Name;
+                    request.OmittedTemperatureKind = member.Kind;
+                }
+            }
+            request.ClientModelId = ClientModel(Receiver(invocation), 0);
+            if (invocation.TargetMethod.IsGenericMethod && invocation.TargetMethod.TypeArguments.Length == 1)
+            {
+                request.ResponseShape = ResponseShape.Structured;
+                request.ResponseShapeEvidence = $"{invocation.TargetMethod.Name}<{invocation.TargetMethod.TypeArguments[0].Name}>";
+            }
+
+            Track(new Instance(request, invocation, null));
+        }
+
+        /// <summary>The client a call goes through: the instance, or the <c>this</c> argument of an extension method.</summary>
+        private static IOperation? Receiver(IInvocationOperation invocation) =>
+            invocation.Instance ?? (invocation.TargetMethod.IsExtensionMethod && invocation.Arguments.Length > 0 ? invocation.Arguments[0].Value : null);
+
+        private static readonly HashSet<string> ModelParameterNames = new HashSet<string>(System.StringComparer.Ordinal)
+        {
+            "model", "modelId", "deploymentName", "defaultModel", "defaultModelId",
+        };
+
+        /// <summary>
+        /// The constant model id of a client: a <c>model</c>-like argument of its creation or of <c>GetChatClient</c>,
+        /// following locals of this block and adapter chains such as <c>.AsIChatClient()</c>.
+        /// </summary>
+        private string? ClientModel(IOperation? client, int depth)
+        {
+            if (client == null || depth > 4)
+            {
+                return null;
+            }
+
+            client = ValueReader.Unwrap(client);
+            IEnumerable<IArgumentOperation> arguments;
+            IOperation? inner = null;
+            switch (client)
+            {
+                case IObjectCreationOperation creation:
+                    arguments = creation.Arguments;
+                    break;
+                case IInvocationOperation call:
+                    arguments = call.Arguments;
+                    inner = Receiver(call);
+                    break;
+                case ILocalReferenceOperation local:
+                    return ClientModel(LocalInitializer(local.Local), depth + 1);
+                case IFieldReferenceOperation field:
+                    return ModelFromSyntax(field.Field);
+                case IPropertyReferenceOperation property:
+                    return ModelFromSyntax(property.Property);
+                default:
+                    return null;
+            }
+
+            foreach (var argument in arguments)
+            {
+                if (argument.Parameter != null && ModelParameterNames.Contains(argument.Parameter.Name)
+                    && ValueReader.ConstantString(argument.Value) is { Length: > 0 } model)
+                {
+                    return model;
+                }
+            }
+
+            return ClientModel(inner, depth + 1);
+        }
+
+        private IOperation? LocalInitializer(ILocalSymbol local)
+        {
+            foreach (var block in blocks)
+            {
+                foreach (var operation in block.DescendantsAndSelf())
+                {
+                    if (operation is IVariableDeclaratorOperation declarator && SymbolEqualityComparer.Default.Equals(declarator.Symbol, local))
+                    {
+                        return declarator.Initializer?.Value;
+                    }
+                }
+            }
+
+            return null;
+        }
+
+        /// <summary>
+        /// A client held in a field or property initialised elsewhere in the type: read the model from syntax (no
+        /// semantic model in the analyzer). A named argument wins; else the first string literal of GetChatClient(…) or
+        /// of the creation that is not an address.
+        /// </summary>
+        private static string? ModelFromSyntax(ISymbol member)
+        {
+            if (member.DeclaringSyntaxReferences.Length != 1)
+            {
+                return null;
+            }
+
+            var initializer = member.DeclaringSyntaxReferences[0].GetSyntax() switch
+            {
+                Microsoft.CodeAnalysis.CSharp.Syntax.VariableDeclaratorSyntax v => v.Initializer?.Value,
+                Microsoft.CodeAnalysis.CSharp.Syntax.PropertyDeclarationSyntax p => p.Initializer?.Value,
+                _ => null,
+            };
+            if (initializer == null)
+            {
+                return null;
+            }
+
+            string? fallback = null;
+            foreach (var argument in initializer.DescendantNodesAndSelf().OfType<Microsoft.CodeAnalysis.CSharp.Syntax.ArgumentSyntax>())
+            {
+                if (argument.Expression is not Microsoft.CodeAnalysis.CSharp.Syntax.LiteralExpressionSyntax { Token.Value: string text } || text.Length == 0)
+                {
+                    continue;
+                }
+
+                if (argument.NameColon != null)
+                {
+                    if (ModelParameterNames.Contains(argument.NameColon.Name.Identifier.ValueText))
+                    {
+                        return text;
+                    }
+
+                    continue;
+                }
+
+                var call = argument.Parent?.Parent;
+                var isGetClient = call is Microsoft.CodeAnalysis.CSharp.Syntax.InvocationExpressionSyntax { Expression: Microsoft.CodeAnalysis.CSharp.Syntax.MemberAccessExpressionSyntax access }
+                    && access.Name.Identifier.ValueText.StartsWith("Get", System.StringComparison.Ordinal)
+                    && access.Name.Identifier.ValueText.EndsWith("Client", System.StringComparison.Ordinal);
+                if (isGetClient)
+                {
+                    return text;
+                }
+
+                if (fallback == null && call is Microsoft.CodeAnalysis.CSharp.Syntax.BaseObjectCreationExpressionSyntax && !text.Contains("://") && !text.Contains(" "))
+                {
+                    fallback = text;
+                }
+            }
+
+            return fallback;
+        }
+
+        /// <summary>
+        /// Where an unset temperature can be added: this creation when its type has a temperature member; for a container
+        /// (Ollama ChatRequest, LLamaSharp InferenceParams) a new nested options object.
+        /// </summary>
+        private MemberTarget? TemperatureTargetOf(IObjectCreationOperation creation, SurfaceDefinition surface)
+        {
+            if (creation.Type == null)
+            {
+                return null;
+            }
+
+            if (TemperatureMember(creation.Type, surface) is { } own)
+            {
+                return new MemberTarget(creation.Syntax, own.Name, own.Kind, null, null);
+            }
+
+            foreach (var nestedName in surface.NestedMembers)
+            {
+                if (FindProperty(creation.Type, nestedName) is { Type: INamedTypeSymbol nestedType } && catalog.Find(nestedType) is { } nestedSurface
+                    && TemperatureMember(nestedType, nestedSurface) is { } nested && nestedType.TypeKind == TypeKind.Class && !nestedType.IsAbstract)
+                {
+                    return new MemberTarget(creation.Syntax, nested.Name, nested.Kind, nestedName, nestedType.ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat));
+                }
+            }
+
+            return null;
+        }
+
+        /// <summary>The temperature member of a surface type, with the literal type it takes.</summary>
+        private static (string Name, NumericKind Kind)? TemperatureMember(ITypeSymbol type, SurfaceDefinition surface)
+        {
+            foreach (var pair in surface.Members)
+            {
+                if (pair.Value == Setting.Temperature && FindProperty(type, pair.Key) is { } property && property.SetMethod != null
+                    && ValueReader.KindOfType(property.Type) is { } kind)
+                {
+                    return (pair.Key, kind);
+                }
+            }
+
+            return null;
+        }
+
+        private static IPropertySymbol? FindProperty(ITypeSymbol type, string name)
+        {
+            for (var current = type; current != null; current = current.BaseType)
+            {
+                foreach (var member in current.GetMembers(name))
+                {
+                    if (member is IPropertySymbol property && !property.IsStatic)
+                    {
+                        return property;
+                    }
+                }
+            }
+
+            return null;
         }
 
         private bool IsClone(IInvocationOperation invocation) =>
@@ -322,6 +590,7 @@ namespace Temperance.Extraction
                 if (ValueReader.Unwrap(value) is IObjectCreationOperation child && catalog.Find(child.Type) is { } childSurface)
                 {
                     ReadInitializer(childSurface, child.Initializer, request);
+                    request.TemperatureTarget ??= TemperatureTargetOf(child, childSurface);
                 }
             }
             else if (name == surface.BagMember && ValueReader.Unwrap(value) is IObjectCreationOperation { Initializer: { } bagInitializer })

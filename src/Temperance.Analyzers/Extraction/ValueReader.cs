@@ -236,6 +236,8 @@ namespace Temperance.Extraction
             };
         }
 
+        public static NumericKind? KindOfType(ITypeSymbol? type) => FromType(type);
+
         private static NumericKind? FromType(ITypeSymbol? type)
         {
             if (type is INamedTypeSymbol { OriginalDefinition.SpecialType: SpecialType.System_Nullable_T } nullable)

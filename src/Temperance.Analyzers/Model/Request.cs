@@ -42,6 +42,27 @@ namespace Temperance.Model
         public IMethodSymbol? SendingCall { get; set; }
         public Location? SendingCallLocation { get; set; }
 
+        /// <summary>The model id from the client that sends the request, when constant (<c>new ChatClient("gpt-4o", …)</c>).</summary>
+        public string? ClientModelId { get; set; }
+        /// <summary>The model id the request goes to: the options' own, else the client's.</summary>
+        public string? EffectiveModelId => ModelId ?? ClientModelId;
+
+        /// <summary>
+        /// True when no options object is passed at all (<c>client.CompleteChat(messages)</c>): every setting is Unset and
+        /// the request lives at the call. <see cref="OmittedParameter"/> names the parameter a fix can fill.
+        /// </summary>
+        public bool IsImplicit { get; set; }
+        public IParameterSymbol? OmittedParameter { get; set; }
+        /// <summary>Where a fix adds the temperature when it is unset; null when no such edit is possible.</summary>
+        public MemberTarget? TemperatureTarget { get; set; }
+        /// <summary>The options type a fix passes when the call has none (fully qualified), with its temperature member.</summary>
+        public string? OmittedOptionsType { get; set; }
+        public NumericKind OmittedTemperatureKind { get; set; }
+        public string? OmittedTemperatureMember { get; set; }
+
+        /// <summary>Task hints gathered by extraction: identifiers, prompt text, annotations. Policy turns them into a task.</summary>
+        public List<TaskSignal> TaskSignals { get; } = new List<TaskSignal>();
+
         public IReadOnlyList<SettingWrite> Writes => writes;
 
         public void Add(SettingWrite write) => writes.Add(write);

@@ -30,6 +30,20 @@ namespace Temperance.Model
             Setting.RepetitionPenalty => "repetition_penalty",
             _ => setting.ToString().ToLowerInvariant(),
         };
+
+        /// <summary>The setting a trade name stands for, or null.</summary>
+        public static Setting? Parse(string name)
+        {
+            foreach (Setting setting in System.Enum.GetValues(typeof(Setting)))
+            {
+                if (string.Equals(setting.KeyName(), name.Trim(), System.StringComparison.OrdinalIgnoreCase))
+                {
+                    return setting;
+                }
+            }
+
+            return null;
+        }
     }
 
     /// <summary>What a request asks the model to return.</summary>

@@ -16,6 +16,21 @@ namespace Temperance.Policy
         /// <summary><c>temperance.task.extraction.temperature</c>: the value fixes write for that task.</summary>
         public static string TaskTemperature(string kind) => $"temperance.task.{kind}.temperature";
 
+        /// <summary><c>temperance.task.extraction.max_temperature</c>: the SAMP001 ceiling for that task.</summary>
+        public static string TaskCeiling(string kind) => $"temperance.task.{kind}.max_temperature";
+
+        public const string CandidatesTemperature = "temperance.candidates_temperature";
+
+        public static string UnsetMeansDefault(string provider) => $"temperance.provider.{provider}.unset_means_default";
+
+        public const string ModelPrefix = "temperance.model.";
+
+        /// <summary><c>temperance.model.&lt;family&gt;.match</c>: comma-separated model-id prefixes of the family.</summary>
+        public static string ModelMatch(string family) => $"{ModelPrefix}{family}.match";
+
+        /// <summary><c>temperance.model.&lt;family&gt;.rejects</c>: the settings the family rejects.</summary>
+        public static string ModelRejects(string family) => $"{ModelPrefix}{family}.rejects";
+
         public static readonly string[] TaskKinds =
         {
             "extraction", "classification", "code", "evaluation", "tool_use",

@@ -77,8 +77,114 @@ namespace Temperance.Policy
 
         public Limit? Default(string provider, Setting setting) => Number(OptionKeys.ProviderLimit(provider, setting, "default"));
 
-        /// <summary>The temperature a fix writes: the task's table value when the task is known, else null.</summary>
-        public Limit? TaskTemperature => TaskKind == null ? null : Number(OptionKeys.TaskTemperature(TaskKind));
+        /// <summary>The temperature fixes write for a task (<c>temperance.task.&lt;kind&gt;.temperature</c>).</summary>
+        public Limit? TaskTemperatureOf(string kind) => Number(OptionKeys.TaskTemperature(kind));
+
+        /// <summary>The ceiling SAMP001 applies to a task; null for kinds without one (creative, brainstorming).</summary>
+        public Limit? TaskCeiling(string kind) => Number(OptionKeys.TaskCeiling(kind));
+
+        /// <summary>The temperature SAMP008's second fix raises to, so several candidates can differ.</summary>
+        public Limit? CandidatesTemperature => Number(OptionKeys.CandidatesTemperature);
+
+        /// <summary>
+        /// Whether an unset temperature really means the provider's documented default. False where something outside the
+        /// call may fill it in (an Ollama Modelfile, an IChatClient pipeline's ConfigureOptions), so SAMP001 stays silent.
+        /// </summary>
+        public bool UnsetMeansDefault(string provider) => Flag(OptionKeys.UnsetMeansDefault(provider)) ?? false;
+
+        /// <summary>The model family whose patterns match a model id, with the settings it rejects.</summary>
+        public ModelFamily? FamilyOf(string? modelId)
+        {
+            if (modelId == null)
+            {
+                return null;
+            }
+
+            foreach (var family in Families())
+            {
+                if (family.Matches(modelId))
+                {
+                    return family;
+                }
+            }
+
+            return null;
+        }
+
+        private IReadOnlyList<ModelFamily>? families;
+
+        private IReadOnlyList<ModelFamily> Families()
+        {
+            lock (gate)
+            {
+                if (families != null)
+                {
+                    return families;
+                }
+            }
+
+            var found = new List<ModelFamily>();
+            var names = treeOptions.Keys.Concat(globalOptions.Keys)
+                .Where(k => k.StartsWith(OptionKeys.ModelPrefix, StringComparison.Ordinal) && k.EndsWith(".match", StringComparison.Ordinal))
+                .Select(k => k.Substring(OptionKeys.ModelPrefix.Length, k.Length - OptionKeys.ModelPrefix.Length - ".match".Length))
+                .Distinct(StringComparer.Ordinal)
+                .OrderBy(n => n, StringComparer.Ordinal);
+            foreach (var name in names)
+            {
+                TryGetRaw(OptionKeys.ModelMatch(name), out var match);
+                TryGetRaw(OptionKeys.ModelRejects(name), out var rejects);
+                var settings = new List<Setting>();
+                foreach (var item in Split(rejects))
+                {
+                    var setting = SettingNames.Parse(item);
+                    if (setting == null)
+                    {
+                        AddProblem(new ConfigProblem(OptionKeys.ModelRejects(name), rejects, "a comma-separated list of settings such as temperature, top_p"));
+                        continue;
+                    }
+
+                    settings.Add(setting.Value);
+                }
+
+                found.Add(new ModelFamily(name, Split(match).ToArray(), settings, OptionKeys.ModelMatch(name)));
+            }
+
+            lock (gate)
+            {
+                families ??= found;
+                return families;
+            }
+        }
+
+        private static IEnumerable<string> Split(string list) =>
+            list.Split(new[] { ',' }, StringSplitOptions.RemoveEmptyEntries).Select(p => p.Trim()).Where(p => p.Length > 0);
+
+        private void AddProblem(ConfigProblem problem)
+        {
+            lock (gate)
+            {
+                if (!problems.Exists(p => p.Key == problem.Key))
+                {
+                    problems.Add(problem);
+                }
+            }
+        }
+
+        private bool? Flag(string key)
+        {
+            if (!TryGetRaw(key, out var raw) || raw.Length == 0)
+            {
+                return null;
+            }
+
+            if (bool.TryParse(raw, out var value))
+            {
+                return value;
+            }
+
+            AddProblem(new ConfigProblem(key, raw, "true or false"));
+            return null;
+        }
 
         /// <summary>A min above its max: both keys are named so the team sees which pair is wrong.</summary>
         public void ReportInvertedRange(Limit min, Limit max)

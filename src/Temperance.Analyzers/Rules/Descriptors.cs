@@ -16,7 +16,7 @@ namespace Temperance.Rules
 
         public static readonly DiagnosticDescriptor TemperatureAboveTaskCeiling = Create(
             "SAMP001", "Temperature above the ceiling for the call's task",
-            "{0} for a task of kind '{1}' ({2}); the ceiling is {3} ({4})",
+            "{0} is above the ceiling {1} for task '{2}' ({3}; ceiling from {4})",
             Sampling, DiagnosticSeverity.Warning,
             "Extraction, classification, code and evaluation calls need focused sampling: at a high temperature (or at the provider default, often 1.0) the structure and the fields of the answer change from run to run.");
 

@@ -6,13 +6,12 @@ namespace Temperance.Rules
     /// <summary>What a rule found, plus the edit a fix should make (carried in diagnostic Properties).</summary>
     internal sealed class Finding
     {
-        public Finding(DiagnosticDescriptor descriptor, Location location, ImmutableArray<Location> additionalLocations,
-            ImmutableDictionary<string, string?> properties, params object[] messageArgs)
+        public Finding(DiagnosticDescriptor descriptor, Location location, FixPlan fix, params object[] messageArgs)
         {
             Descriptor = descriptor;
             Location = location;
-            AdditionalLocations = additionalLocations;
-            Properties = properties;
+            AdditionalLocations = fix.Locations;
+            Properties = fix.Properties;
             MessageArgs = messageArgs;
         }
 

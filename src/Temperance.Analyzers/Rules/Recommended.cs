@@ -1,3 +1,4 @@
+using Temperance.Model;
 using Temperance.Policy;
 
 namespace Temperance.Rules
@@ -8,17 +9,26 @@ namespace Temperance.Rules
         /// <summary>Neutral temperature when no task is known: the model's own distribution, unscaled.</summary>
         public const double NeutralTemperature = 1.0;
 
-        public static Limit Temperature(TemperancePolicy policy) =>
-            policy.TaskTemperature ?? new Limit(NeutralTemperature, "no task known: the model's unscaled distribution");
+        /// <summary>The task's table temperature when a task is known (inferred or configured), else the neutral 1.0.</summary>
+        public static Limit Temperature(Request request, TemperancePolicy policy)
+        {
+            var task = TaskInference.Infer(request, policy);
+            if (task != null && policy.TaskTemperatureOf(task.Kind) is { } value)
+            {
+                return value;
+            }
+
+            return new Limit(NeutralTemperature, "no task known: the model's unscaled distribution");
+        }
     }
 
     /// <summary>Pieces of messages several rules share.</summary>
     internal static class Notes
     {
-        public static string Conditional(Model.SettingWrite write) =>
+        public static string Conditional(SettingWrite write) =>
             write.FromConditional ? " (one branch of a conditional; the worst branch is judged)" : string.Empty;
 
-        public static string Origin(Model.SettingWrite write) =>
+        public static string Origin(SettingWrite write) =>
             write.Origin == null ? string.Empty : $" (from {write.Origin})";
     }
 }

@@ -13,6 +13,8 @@ namespace Temperance.Rules
             {
                 ValueOutOfRangeRule.Evaluate,
                 ExtremeTemperatureRule.Evaluate,
+                TaskCeilingRule.Evaluate,
+                CandidatesAtZeroRule.Evaluate,
             };
     }
 }

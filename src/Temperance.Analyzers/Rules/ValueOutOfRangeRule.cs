@@ -23,12 +23,11 @@ namespace Temperance.Rules
                 // Clamping a temperature to a high maximum (2.0) would land on SAMP009; write the recommended value instead.
                 if (write.Setting == Setting.Temperature && policy.ExtremeTemperature is { } extreme && fixValue > extreme.Value)
                 {
-                    fixValue = Recommended.Temperature(policy).Value;
+                    fixValue = Recommended.Temperature(request, policy).Value;
                 }
 
-                var (locations, properties) = FixProperties.SetValueEdit(write, fixValue);
                 yield return new Finding(
-                    Descriptors.ValueOutOfRange, write.Location, locations, properties,
+                    Descriptors.ValueOutOfRange, write.Location, new FixPlan().SetValue(write, fixValue),
                     write.Member, FixProperties.Show(write.Value) + Notes.Origin(write), RangeText(min, max), request.Provider,
                     write.Setting.KeyName(), limitKey, Notes.Conditional(write));
             }

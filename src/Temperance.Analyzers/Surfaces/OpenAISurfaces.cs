@@ -9,7 +9,8 @@ namespace Temperance.Surfaces
         {
             new SurfaceDefinition("OpenAI.Chat.ChatCompletionOptions", Providers.OpenAI) { ResponseFormatMember = "ResponseFormat" }
                 .OpenAIShape()
-                .Map("Seed", Setting.Seed),
+                .Map("Seed", Setting.Seed)
+                .Sends("OpenAI.Chat.ChatClient", "CompleteChat", "CompleteChatAsync", "CompleteChatStreaming", "CompleteChatStreamingAsync"),
             // Responses API: no seed, no penalties; the model sits on the options.
             new SurfaceDefinition("OpenAI.Responses.CreateResponseOptions", Providers.OpenAI) { ModelMember = "Model", ResponseFormatMember = "TextOptions" }
                 .Map("Temperature", Setting.Temperature)

@@ -17,10 +17,13 @@ namespace Temperance.Surfaces
             .ToArray();
 
         private readonly Dictionary<INamedTypeSymbol, SurfaceDefinition> byType;
+        private readonly Dictionary<INamedTypeSymbol, (SurfaceDefinition Surface, HashSet<string> Methods)> sendMethods;
 
-        private SurfaceCatalog(Dictionary<INamedTypeSymbol, SurfaceDefinition> byType, INamedTypeSymbol? jsonObject, INamedTypeSymbol? dictionary)
+        private SurfaceCatalog(Dictionary<INamedTypeSymbol, SurfaceDefinition> byType, Dictionary<INamedTypeSymbol, (SurfaceDefinition, HashSet<string>)> sendMethods,
+            INamedTypeSymbol? jsonObject, INamedTypeSymbol? dictionary)
         {
             this.byType = byType;
+            this.sendMethods = sendMethods;
             JsonObjectType = jsonObject;
             DictionaryType = dictionary;
         }
@@ -40,8 +43,18 @@ namespace Temperance.Surfaces
                 }
             }
 
+            var sendMethods = new Dictionary<INamedTypeSymbol, (SurfaceDefinition, HashSet<string>)>(SymbolEqualityComparer.Default);
+            foreach (var definition in Definitions)
+            {
+                if (definition.SentBy != null && compilation.GetTypeByMetadataName(definition.SentBy) is { } client)
+                {
+                    sendMethods[client] = (definition, new HashSet<string>(definition.SendMethods, System.StringComparer.Ordinal));
+                }
+            }
+
             return new SurfaceCatalog(
                 byType,
+                sendMethods,
                 compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[0]),
                 compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[1]));
         }
@@ -58,6 +71,26 @@ namespace Temperance.Surfaces
             }
 
             return null;
+        }
+
+        /// <summary>
+        /// Send methods that have an overload without any options parameter (OpenAI's <c>CompleteChat(params ChatMessage[])</c>):
+        /// the surface whose defaults then apply. Protocol overloads taking raw BinaryContent are not typed requests.
+        /// </summary>
+        public SurfaceDefinition? SurfaceSentBy(IMethodSymbol method)
+        {
+            if (method.ContainingType == null || !sendMethods.TryGetValue(method.ContainingType.OriginalDefinition, out var sent)
+                || !sent.Methods.Contains(method.Name))
+            {
+                return null;
+            }
+
+            if (method.Parameters.Length > 0 && method.Parameters[0].Type.Name == "BinaryContent")
+            {
+                return null;
+            }
+
+            return sent.Surface;
         }
 
         /// <summary>A string-keyed dictionary or JsonObject that could be a hand-built payload.</summary>

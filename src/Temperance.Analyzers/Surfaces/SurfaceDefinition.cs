@@ -38,6 +38,10 @@ namespace Temperance.Surfaces
         public string? KeyedMethod { get; set; }
         /// <summary>A method whose call fixes the response shape (<c>SetGuidance</c>).</summary>
         public string? ShapeMethod { get; set; }
+        /// <summary>The client type whose <see cref="SendMethods"/> send this surface's requests even with no options passed.</summary>
+        public string? SentBy { get; set; }
+        public List<string> SendMethods { get; } = new List<string>();
+
         /// <summary>True for the member-less request types (Anthropic 13.x has no sampling members at all).</summary>
         public bool HasNoSamplingMembers { get; set; }
 
@@ -50,6 +54,13 @@ namespace Temperance.Surfaces
         public SurfaceDefinition Key(string key, Setting setting)
         {
             Keys[key] = setting;
+            return this;
+        }
+
+        public SurfaceDefinition Sends(string clientType, params string[] methods)
+        {
+            SentBy = clientType;
+            SendMethods.AddRange(methods);
             return this;
         }
 

@@ -63,7 +63,7 @@ public static class Extract
 
             if (!collector.IsEmpty)
             {
-                requests.AddRange(RequestBuilder.Build(catalog, new CallContext(owner, owner?.ContainingType, tests.IsTest(owner)), collector));
+                requests.AddRange(RequestBuilder.Build(catalog, new CallContext(owner, owner?.ContainingType, tests.IsTest(owner)), collector, new[] { operation }));
             }
         }
 

@@ -80,7 +80,14 @@ public class RulesTableTests
     {
         foreach (var entry in RulesTable.Entries.Where(e => e.Key.StartsWith("temperance.", StringComparison.Ordinal)))
         {
-            Assert.True(double.TryParse(entry.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out _), entry.Key);
+            if (entry.Key.EndsWith(".unset_means_default", StringComparison.Ordinal))
+            {
+                Assert.True(bool.TryParse(entry.Value, out _), entry.Key);
+            }
+            else if (!entry.Key.StartsWith("temperance.model.", StringComparison.Ordinal))
+            {
+                Assert.True(double.TryParse(entry.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out _), entry.Key);
+            }
         }
 
         foreach (var min in RulesTable.Entries.Where(e => e.Key.EndsWith(".min", StringComparison.Ordinal)))

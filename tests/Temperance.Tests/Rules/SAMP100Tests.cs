@@ -54,7 +54,7 @@ public class SAMP100Tests
 
             class Settings
             {
-                ChatCompletionOptions A() => new ChatCompletionOptions { Temperature = 0.4f };
+                ChatCompletionOptions A() => new ChatCompletionOptions { Temperature = 0.2f };
             }
             """, "temperance.task = extraction\ntemperance.extreme_temperature = 1.4\n");
     }

@@ -1,0 +1,180 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using System.Text.RegularExpressions;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.CSharp.Syntax;
+using Microsoft.CodeAnalysis.Operations;
+using Temperance.Model;
+
+namespace Temperance.Extraction
+{
+    /// <summary>
+    /// Reads what the code says about a call's task: an annotation, identifiers, and constant prompt text in the same
+    /// block. It only collects signals; deciding the task (and which signal wins) is the policy's job.
+    /// </summary>
+    internal static class TaskSignalReader
+    {
+        /// <summary>The annotation a team may declare itself (any namespace): <c>[LlmTask("extraction")]</c>.</summary>
+        public const string AnnotationName = "LlmTaskAttribute";
+
+        private const int QuoteLength = 48;
+
+        // Identifier words, after splitting on case and digits. Words that are ambiguous in ordinary code
+        // ("query", "chat", "reply") are left out on purpose.
+        private static readonly Dictionary<string, string> NameWords = new Dictionary<string, string>(StringComparer.Ordinal)
+        {
+            ["extract"] = "extraction", ["extractor"] = "extraction", ["extraction"] = "extraction", ["parse"] = "extraction", ["parser"] = "extraction",
+            ["classify"] = "classification", ["classifier"] = "classification", ["classification"] = "classification",
+            ["categorize"] = "classification", ["categorise"] = "classification", ["label"] = "classification", ["labeler"] = "classification", ["labeller"] = "classification",
+            ["grade"] = "evaluation", ["grader"] = "evaluation", ["judge"] = "evaluation", ["evaluate"] = "evaluation", ["evaluator"] = "evaluation",
+            ["score"] = "evaluation", ["scorer"] = "evaluation",
+            ["translate"] = "translation", ["translator"] = "translation", ["translation"] = "translation",
+            ["summarize"] = "summarization", ["summarise"] = "summarization", ["summarizer"] = "summarization", ["summariser"] = "summarization",
+            ["summary"] = "summarization", ["summarization"] = "summarization",
+            ["sql"] = "code", ["codegen"] = "code", ["code"] = "code",
+            ["brainstorm"] = "brainstorming", ["ideas"] = "brainstorming", ["ideation"] = "brainstorming",
+            ["poem"] = "creative", ["story"] = "creative", ["slogan"] = "creative", ["tagline"] = "creative", ["lyrics"] = "creative",
+        };
+
+        // Phrases in prompt text (lower case). "helpful assistant" and the like say nothing about the task.
+        private static readonly (string Phrase, string Kind)[] PromptPhrases =
+        {
+            ("extract", "extraction"), ("return only json", "extraction"), ("respond only with json", "extraction"),
+            ("respond with json", "extraction"), ("reply with json", "extraction"), ("as a json object", "extraction"), ("fill in the fields", "extraction"),
+            ("classify", "classification"), ("label the", "classification"), ("label this", "classification"), ("as one of", "classification"),
+            ("one of the following labels", "classification"), ("reply with the label", "classification"), ("categorize", "classification"),
+            ("categorise", "classification"), ("which category", "classification"),
+            ("write a sql", "code"), ("sql query", "code"), ("write a c#", "code"), ("write a function", "code"), ("write a method", "code"),
+            ("generate code", "code"), ("return only code", "code"),
+            ("grade the", "evaluation"), ("score the", "evaluation"), ("rate the", "evaluation"), ("you are a judge", "evaluation"),
+            ("on a scale of", "evaluation"), ("evaluate the", "evaluation"),
+            ("translate", "translation"),
+            ("summarize", "summarization"), ("summarise", "summarization"), ("summary of", "summarization"),
+            ("brainstorm", "brainstorming"), ("come up with ideas", "brainstorming"), ("list ideas", "brainstorming"),
+            ("write a poem", "creative"), ("write a story", "creative"), ("short story", "creative"), ("poem about", "creative"),
+        };
+
+        private static readonly Regex Words = new Regex("[A-Z]+(?![a-z])|[A-Z]?[a-z]+", RegexOptions.CultureInvariant);
+
+        /// <summary>An explicit <c>[LlmTask("kind")]</c> on the member, or on its type or an enclosing type.</summary>
+        public static TaskSignal? Annotation(ISymbol? member)
+        {
+            for (var symbol = member; symbol != null; symbol = symbol.ContainingType)
+            {
+                foreach (var attribute in symbol.GetAttributes())
+                {
+                    if (attribute.AttributeClass?.Name == AnnotationName
+                        && attribute.ConstructorArguments.Length == 1
+                        && attribute.ConstructorArguments[0].Value is string kind)
+                    {
+                        return new TaskSignal(kind.Trim().ToLowerInvariant(), TaskSignalSource.Annotation, $"[LlmTask(\"{kind}\")] on '{symbol.Name}'");
+                    }
+                }
+
+                if (symbol is INamedTypeSymbol && symbol.ContainingType == null)
+                {
+                    break;
+                }
+            }
+
+            return null;
+        }
+
+        /// <summary>Task words in the names of the containing member, its type and the variable holding the options.</summary>
+        public static IEnumerable<TaskSignal> FromNames(ISymbol? member, ISymbol? holder)
+        {
+            var named = new List<(string Name, string What)>();
+            if (member != null)
+            {
+                named.Add((member.Name, member is IMethodSymbol ? "method name" : "member name"));
+                if (member.ContainingType != null)
+                {
+                    named.Add((member.ContainingType.Name, "type name"));
+                }
+            }
+
+            if (holder != null)
+            {
+                named.Add((holder.Name, "variable name"));
+            }
+
+            foreach (var (name, what) in named)
+            {
+                foreach (Match word in Words.Matches(name))
+                {
+                    if (NameWords.TryGetValue(word.Value.ToLowerInvariant(), out var kind))
+                    {
+                        yield return new TaskSignal(kind, TaskSignalSource.Name, $"the {what} '{name}'");
+                        break;
+                    }
+                }
+            }
+        }
+
+        /// <summary>Constant text in the block: literals, const fields, static readonly string fields, interpolation text.</summary>
+        public static IEnumerable<TaskSignal> FromPrompts(IEnumerable<IOperation> blocks)
+        {
+            var seen = new HashSet<string>(StringComparer.Ordinal);
+            foreach (var text in ConstantTexts(blocks))
+            {
+                var lower = text.ToLowerInvariant();
+                foreach (var (phrase, kind) in PromptPhrases)
+                {
+                    if (lower.Contains(phrase) && seen.Add(kind))
+                    {
+                        yield return new TaskSignal(kind, TaskSignalSource.Prompt, $"the prompt text '{Quote(text)}'");
+                        break;
+                    }
+                }
+            }
+        }
+
+        private static IEnumerable<string> ConstantTexts(IEnumerable<IOperation> blocks)
+        {
+            foreach (var block in blocks)
+            {
+                foreach (var operation in block.DescendantsAndSelf())
+                {
+                    switch (operation)
+                    {
+                        case ILiteralOperation { ConstantValue: { HasValue: true, Value: string literal } } when literal.Length > 6:
+                            yield return literal;
+                            break;
+                        case IFieldReferenceOperation { Field: { } field } when field.Type.SpecialType == SpecialType.System_String:
+                            if (field.HasConstantValue && field.ConstantValue is string constant)
+                            {
+                                yield return constant;
+                            }
+                            else if (field.IsStatic && field.IsReadOnly && StaticReadonlyText(field) is { } text)
+                            {
+                                yield return text;
+                            }
+
+                            break;
+                        case IInterpolatedStringTextOperation { Text.ConstantValue: { HasValue: true, Value: string part } }:
+                            yield return part;
+                            break;
+                    }
+                }
+            }
+        }
+
+        private static string? StaticReadonlyText(IFieldSymbol field)
+        {
+            if (field.DeclaringSyntaxReferences.Length != 1
+                || field.DeclaringSyntaxReferences[0].GetSyntax() is not VariableDeclaratorSyntax { Initializer.Value: LiteralExpressionSyntax literal })
+            {
+                return null;
+            }
+
+            return literal.Token.Value as string;
+        }
+
+        private static string Quote(string text)
+        {
+            var flat = Regex.Replace(text, @"\s+", " ").Trim();
+            return flat.Length <= QuoteLength ? flat : flat.Substring(0, QuoteLength) + "…";
+        }
+    }
+}

@@ -1,0 +1,41 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using Temperance.Model;
+
+namespace Temperance.Policy
+{
+    /// <summary>A family of models from the rules table: which model ids belong to it and which settings it rejects.</summary>
+    internal sealed class ModelFamily
+    {
+        public ModelFamily(string name, IReadOnlyList<string> prefixes, IReadOnlyList<Setting> rejects, string key)
+        {
+            Name = name;
+            Prefixes = prefixes;
+            Rejects = rejects;
+            Key = key;
+        }
+
+        public string Name { get; }
+        public IReadOnlyList<string> Prefixes { get; }
+        public IReadOnlyList<Setting> Rejects { get; }
+        public string Key { get; }
+
+        /// <summary>
+        /// A prefix matches at a word boundary: "o3" matches "o3", "o3-mini" and "o3.1", not "o30"; a trailing '*' in the
+        /// table is allowed and means the same.
+        /// </summary>
+        public bool Matches(string modelId) => Prefixes.Any(prefix =>
+        {
+            var bare = prefix.TrimEnd('*');
+            if (!modelId.StartsWith(bare, StringComparison.OrdinalIgnoreCase))
+            {
+                return false;
+            }
+
+            return modelId.Length == bare.Length || !char.IsLetterOrDigit(modelId[bare.Length]) || bare.EndsWith("-", StringComparison.Ordinal);
+        });
+
+        public bool RejectsSetting(Setting setting) => Rejects.Contains(setting);
+    }
+}
