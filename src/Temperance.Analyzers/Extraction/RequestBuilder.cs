@@ -413,7 +413,13 @@ namespace Temperance.Extraction
 
             foreach (var nestedName in surface.NestedMembers)
             {
-                if (FindProperty(creation.Type, nestedName) is { Type: INamedTypeSymbol nestedType } && catalog.Find(nestedType) is { } nestedSurface
+                var nestedType = FindProperty(creation.Type, nestedName)?.Type as INamedTypeSymbol;
+                if (surface.NestedConcreteTypes.TryGetValue(nestedName, out var concrete) && catalog.TypeOf(concrete) is { } concreteType)
+                {
+                    nestedType = concreteType;
+                }
+
+                if (nestedType != null && catalog.Find(nestedType) is { } nestedSurface
                     && TemperatureMember(nestedType, nestedSurface) is { } nested && nestedType.TypeKind == TypeKind.Class && !nestedType.IsAbstract)
                 {
                     return new MemberTarget(creation.Syntax, nested.Name, nested.Kind, nestedName, nestedType.ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat));

@@ -14,7 +14,7 @@ namespace Temperance.Surfaces
                 .Map("Seed", Setting.Seed)
                 .Map("RepeatPenalty", Setting.RepetitionPenalty),
             new SurfaceDefinition("LLama.Common.InferenceParams", Providers.LLamaSharp)
-                .Nested("SamplingPipeline"),
+                .Nested("SamplingPipeline", "LLama.Sampling.DefaultSamplingPipeline"),
             // Everything goes through string keys; these are the ones the managed assembly itself uses.
             new SurfaceDefinition("Microsoft.ML.OnnxRuntimeGenAI.GeneratorParams", Providers.OnnxGenAI) { KeyedMethod = "SetSearchOption", ShapeMethod = "SetGuidance" }
                 .Key("temperature", Setting.Temperature)

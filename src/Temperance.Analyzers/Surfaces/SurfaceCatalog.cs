@@ -59,6 +59,20 @@ namespace Temperance.Surfaces
                 compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[1]));
         }
 
+        /// <summary>A resolved surface type by metadata name.</summary>
+        public INamedTypeSymbol? TypeOf(string metadataName)
+        {
+            foreach (var pair in byType)
+            {
+                if (pair.Value.MetadataName == metadataName)
+                {
+                    return pair.Key;
+                }
+            }
+
+            return null;
+        }
+
         /// <summary>The surface of a type or of its nearest base type that is one (user subclasses, Azure SK settings).</summary>
         public SurfaceDefinition? Find(ITypeSymbol? type)
         {

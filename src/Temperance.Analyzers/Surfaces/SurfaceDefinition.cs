@@ -64,11 +64,22 @@ namespace Temperance.Surfaces
             return this;
         }
 
-        public SurfaceDefinition Nested(string member)
+        /// <summary>
+        /// A member holding another surface; <paramref name="concreteType"/> names the type a fix creates when the member's
+        /// own type is an interface (LLamaSharp's <c>ISamplingPipeline</c>).
+        /// </summary>
+        public SurfaceDefinition Nested(string member, string? concreteType = null)
         {
             NestedMembers.Add(member);
+            if (concreteType != null)
+            {
+                NestedConcreteTypes[member] = concreteType;
+            }
+
             return this;
         }
+
+        public Dictionary<string, string> NestedConcreteTypes { get; } = new Dictionary<string, string>(StringComparer.Ordinal);
 
         /// <summary>The members most OpenAI-shaped SDKs share.</summary>
         public SurfaceDefinition OpenAIShape(string topPMember = "TopP") =>
