@@ -25,7 +25,8 @@ namespace Temperance.CodeFixes
     {
         public override ImmutableArray<string> FixableDiagnosticIds { get; } = ImmutableArray.Create(
             Descriptors.ValueOutOfRange.Id, Descriptors.ExtremeTemperature.Id,
-            Descriptors.TemperatureAboveTaskCeiling.Id, Descriptors.CandidatesAtTemperatureZero.Id);
+            Descriptors.TemperatureAboveTaskCeiling.Id, Descriptors.CandidatesAtTemperatureZero.Id,
+            Descriptors.TemperatureAndTopPBothChanged.Id, Descriptors.InertSetting.Id, Descriptors.SettingRejectedOrDropped.Id);
 
         public override FixAllProvider GetFixAllProvider() => WellKnownFixAllProviders.BatchFixer;
 
@@ -41,7 +42,8 @@ namespace Temperance.CodeFixes
 
                 for (var index = 0; index < count && index < diagnostic.AdditionalLocations.Count; index++)
                 {
-                    if (Edit.TryRead(diagnostic, index, out var edit))
+                    if (Edit.TryRead(diagnostic, index, out var edit) && (edit.Kind != FixProperties.RemoveMember || context.Document.TryGetSyntaxRoot(out var root) is false
+                        || Removable(root!.FindNode(edit.Span, getInnermostNodeForTie: true)) != null))
                     {
                         context.RegisterCodeFix(
                             CodeAction.Create(edit.Title, ct => ApplyAsync(context.Document, edit, ct), FixProperties.Key(diagnostic.Id, edit.Kind, index)),
@@ -74,11 +76,39 @@ namespace Temperance.CodeFixes
                     root.ReplaceNode(value, SyntaxFactory.ParseExpression(edit.Literal).WithTriviaFrom(value)),
                 FixProperties.AddMember when FindCreation(node) is { } creation =>
                     root.ReplaceNode(creation, AddMember(creation, edit)),
+                FixProperties.RemoveMember when Removable(node) is { } removable =>
+                    root.RemoveNode(removable, SyntaxRemoveOptions.KeepExteriorTrivia | SyntaxRemoveOptions.KeepDirectives) ?? root,
                 FixProperties.AddArgument when node.DescendantNodesAndSelf().OfType<InvocationExpressionSyntax>().FirstOrDefault() is { } call =>
                     root.ReplaceNode(call, AddArgument(call, edit)),
                 _ => root,
             };
             return document.WithSyntaxRoot(replaced);
+        }
+
+        /// <summary>
+        /// What removing a setting removes: an initializer element, an anonymous-object member, or the whole statement of a
+        /// mutation or keyed call. Null when nothing can go (an expression-bodied member is the call itself).
+        /// </summary>
+        private static SyntaxNode? Removable(SyntaxNode node)
+        {
+            for (var current = node; current != null; current = current.Parent)
+            {
+                switch (current)
+                {
+                    case AnonymousObjectMemberDeclaratorSyntax member:
+                        return member;
+                    case ExpressionSyntax element when current.Parent is InitializerExpressionSyntax:
+                        return element;
+                    case ExpressionStatementSyntax statement:
+                        return statement;
+                    case ArrowExpressionClauseSyntax:
+                    case StatementSyntax:
+                    case MemberDeclarationSyntax:
+                        return null;
+                }
+            }
+
+            return null;
         }
 
         private static BaseObjectCreationExpressionSyntax? FindCreation(SyntaxNode node) =>
@@ -193,6 +223,7 @@ namespace Temperance.CodeFixes
             {
                 FixProperties.AddMember => $"Add {Member} = {Literal}",
                 FixProperties.AddArgument => $"Pass options with {Member} = {Literal}",
+                FixProperties.RemoveMember => $"Remove {Member}",
                 _ => $"Set {Member} to {Literal}",
             };
 

@@ -202,6 +202,11 @@ namespace Temperance.Extraction
                     instance.Request.SendingCall = method;
                     instance.Request.SendingCallLocation = invocation.Syntax.GetLocation();
                     instance.Request.ClientModelId = ClientModel(Receiver(invocation), 0);
+                    if (ClientAdapter(Receiver(invocation), 0) is { } adapter)
+                    {
+                        instance.Request.Adapter = adapter.Name;
+                        instance.Request.AdapterDisplay = adapter.Display;
+                    }
                     if (method.IsGenericMethod && method.TypeArguments.Length == 1 && instance.Request.ResponseShape is ResponseShape.Unspecified or ResponseShape.Text)
                     {
                         instance.Request.ResponseShape = ResponseShape.Structured;
@@ -318,6 +323,28 @@ namespace Temperance.Extraction
             }
 
             return ClientModel(inner, depth + 1);
+        }
+
+        /// <summary>The adapter behind an IChatClient, following locals of this block and casts (<c>(IChatClient)service</c>).</summary>
+        private AdapterDefinition? ClientAdapter(IOperation? client, int depth)
+        {
+            if (client == null || depth > 4)
+            {
+                return null;
+            }
+
+            var operation = client;
+            while (operation is IConversionOperation conversion)
+            {
+                operation = conversion.Operand;
+            }
+
+            if (operation is ILocalReferenceOperation local)
+            {
+                return ClientAdapter(LocalInitializer(local.Local), depth + 1);
+            }
+
+            return catalog.AdapterCreatedBy(operation);
         }
 
         private IOperation? LocalInitializer(ILocalSymbol local)

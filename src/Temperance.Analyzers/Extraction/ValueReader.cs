@@ -198,6 +198,8 @@ namespace Temperance.Extraction
                 case ulong ul: number = ul; return true;
                 case short s: number = s; return true;
                 case byte b: number = b; return true;
+                // ONNX do_sample: false is greedy search.
+                case bool flag: number = flag ? 1 : 0; return true;
                 default: number = 0; return false;
             }
         }

@@ -47,6 +47,10 @@ namespace Temperance.Model
         /// <summary>The model id the request goes to: the options' own, else the client's.</summary>
         public string? EffectiveModelId => ModelId ?? ClientModelId;
 
+        /// <summary>The IChatClient adapter the request goes through, when its creation is visible in the same block.</summary>
+        public string? Adapter { get; set; }
+        public string? AdapterDisplay { get; set; }
+
         /// <summary>
         /// True when no options object is passed at all (<c>client.CompleteChat(messages)</c>): every setting is Unset and
         /// the request lives at the call. <see cref="OmittedParameter"/> names the parameter a fix can fill.

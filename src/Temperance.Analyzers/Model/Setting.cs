@@ -12,6 +12,8 @@ namespace Temperance.Model
         FrequencyPenalty,
         PresencePenalty,
         RepetitionPenalty,
+        /// <summary>ONNX Runtime GenAI's switch between sampling (true) and greedy search (false).</summary>
+        DoSample,
     }
 
     internal static class SettingNames
@@ -28,6 +30,7 @@ namespace Temperance.Model
             Setting.FrequencyPenalty => "frequency_penalty",
             Setting.PresencePenalty => "presence_penalty",
             Setting.RepetitionPenalty => "repetition_penalty",
+            Setting.DoSample => "do_sample",
             _ => setting.ToString().ToLowerInvariant(),
         };
 

@@ -31,6 +31,12 @@ namespace Temperance.Policy
         /// <summary><c>temperance.model.&lt;family&gt;.rejects</c>: the settings the family rejects.</summary>
         public static string ModelRejects(string family) => $"{ModelPrefix}{family}.rejects";
 
+        /// <summary><c>temperance.adapter.openai_chat.drops</c>: ChatOptions settings an IChatClient adapter ignores.</summary>
+        public static string AdapterDrops(string adapter) => $"temperance.adapter.{adapter}.drops";
+
+        /// <summary><c>temperance.adapter.openai_chat.drops_bag_keys</c>: whether it ignores sampling keys in AdditionalProperties.</summary>
+        public static string AdapterDropsBagKeys(string adapter) => $"temperance.adapter.{adapter}.drops_bag_keys";
+
         public static readonly string[] TaskKinds =
         {
             "extraction", "classification", "code", "evaluation", "tool_use",

@@ -92,6 +92,29 @@ namespace Temperance.Policy
         /// </summary>
         public bool UnsetMeansDefault(string provider) => Flag(OptionKeys.UnsetMeansDefault(provider)) ?? false;
 
+        /// <summary>The settings an IChatClient adapter drops (<c>temperance.adapter.&lt;name&gt;.drops</c>), and whether it ignores bag keys.</summary>
+        public (IReadOnlyList<Setting> Drops, bool DropsBagKeys, string Key) AdapterDrops(string adapter)
+        {
+            var key = OptionKeys.AdapterDrops(adapter);
+            var drops = new List<Setting>();
+            if (TryGetRaw(key, out var raw))
+            {
+                foreach (var item in Split(raw))
+                {
+                    if (SettingNames.Parse(item) is { } setting)
+                    {
+                        drops.Add(setting);
+                    }
+                    else
+                    {
+                        AddProblem(new ConfigProblem(key, raw, "a comma-separated list of settings such as temperature, top_k"));
+                    }
+                }
+            }
+
+            return (drops, Flag(OptionKeys.AdapterDropsBagKeys(adapter)) ?? false, key);
+        }
+
         /// <summary>The model family whose patterns match a model id, with the settings it rejects.</summary>
         public ModelFamily? FamilyOf(string? modelId)
         {

@@ -34,7 +34,7 @@ namespace Temperance.Rules
 
         public static readonly DiagnosticDescriptor TemperatureAndTopPBothChanged = Create(
             "SAMP004", "Temperature and top-p both moved away from the provider's defaults",
-            "Both temperature ({0}) and top-p ({1}) differ from {2}'s defaults; change one of them, not both",
+            "Both temperature ({0}) and top-p ({1}) differ from {2}'s defaults (temperature {3}, top-p {4}); change one of them, not both",
             Sampling, DiagnosticSeverity.Warning,
             "Temperature and nucleus (top-p) sampling reshape the same distribution; providers advise changing one, not both, because their combined effect is hard to predict.");
 

@@ -18,6 +18,9 @@ namespace Temperance.Rules
         public const string SetValue = "SetValue";
         /// <summary>Add <c>Member = literal</c> to the object creation at the location (creating the initializer, or a wrapper object).</summary>
         public const string AddMember = "AddMember";
+        /// <summary>Remove the member assignment, bag entry, payload member or statement at the location.</summary>
+        public const string RemoveMember = "RemoveMember";
+
         /// <summary>Add a named options argument <c>param: new Type { Member = literal }</c> to the call at the location.</summary>
         public const string AddArgument = "AddArgument";
 
@@ -51,6 +54,12 @@ namespace Temperance.Rules
                 Add(FixProperties.SetValue, write.ValueSyntax.GetLocation(), value, write.LiteralKind, write.Member);
             }
 
+            return this;
+        }
+
+        public FixPlan Remove(SettingWrite write)
+        {
+            Add(FixProperties.RemoveMember, write.Location, 0, write.LiteralKind, write.Member);
             return this;
         }
 

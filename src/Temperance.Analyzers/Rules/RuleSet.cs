@@ -15,6 +15,9 @@ namespace Temperance.Rules
                 ExtremeTemperatureRule.Evaluate,
                 TaskCeilingRule.Evaluate,
                 CandidatesAtZeroRule.Evaluate,
+                RejectedSettingRule.Evaluate,
+                TemperatureAndTopPRule.Evaluate,
+                InertSettingRule.Evaluate,
             };
     }
 }

@@ -21,7 +21,8 @@ namespace Temperance.Surfaces
                 .Key("top_p", Setting.TopP)
                 .Key("top_k", Setting.TopK)
                 .Key("random_seed", Setting.Seed)
-                .Key("repetition_penalty", Setting.RepetitionPenalty),
+                .Key("repetition_penalty", Setting.RepetitionPenalty)
+                .Key("do_sample", Setting.DoSample),
         };
     }
 }

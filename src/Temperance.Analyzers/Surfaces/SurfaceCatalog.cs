@@ -1,6 +1,7 @@
 using System.Collections.Generic;
 using System.Linq;
 using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
 
 namespace Temperance.Surfaces
 {
@@ -18,6 +19,8 @@ namespace Temperance.Surfaces
 
         private readonly Dictionary<INamedTypeSymbol, SurfaceDefinition> byType;
         private readonly Dictionary<INamedTypeSymbol, (SurfaceDefinition Surface, HashSet<string> Methods)> sendMethods;
+        private readonly List<(AdapterDefinition Adapter, INamedTypeSymbol Declaring, INamedTypeSymbol? Receiver)> adapters =
+            new List<(AdapterDefinition, INamedTypeSymbol, INamedTypeSymbol?)>();
 
         private SurfaceCatalog(Dictionary<INamedTypeSymbol, SurfaceDefinition> byType, Dictionary<INamedTypeSymbol, (SurfaceDefinition, HashSet<string>)> sendMethods,
             INamedTypeSymbol? jsonObject, INamedTypeSymbol? dictionary)
@@ -52,11 +55,49 @@ namespace Temperance.Surfaces
                 }
             }
 
-            return new SurfaceCatalog(
+            var catalog = new SurfaceCatalog(
                 byType,
                 sendMethods,
                 compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[0]),
                 compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[1]));
+            foreach (var adapter in AdapterSurfaces.All)
+            {
+                if (compilation.GetTypeByMetadataName(adapter.DeclaringType) is { } declaring)
+                {
+                    var receiver = adapter.ReceiverType == null ? null : compilation.GetTypeByMetadataName(adapter.ReceiverType);
+                    if (adapter.ReceiverType == null || receiver != null)
+                    {
+                        catalog.adapters.Add((adapter, declaring, receiver));
+                    }
+                }
+            }
+
+            return catalog;
+        }
+
+        /// <summary>The adapter an operation creates: an adapter method call, or <c>new</c> of an adapter type.</summary>
+        public AdapterDefinition? AdapterCreatedBy(IOperation operation)
+        {
+            foreach (var (adapter, declaring, receiver) in adapters)
+            {
+                switch (operation)
+                {
+                    case IInvocationOperation call when adapter.Method != null && call.TargetMethod.Name == adapter.Method
+                        && SymbolEqualityComparer.Default.Equals(call.TargetMethod.ContainingType, declaring):
+                        var self = call.TargetMethod.Parameters.Length > 0 ? call.TargetMethod.Parameters[0].Type : null;
+                        if (receiver == null || SymbolEqualityComparer.Default.Equals(self, receiver))
+                        {
+                            return adapter;
+                        }
+
+                        break;
+                    case IObjectCreationOperation creation when adapter.Method == null
+                        && SymbolEqualityComparer.Default.Equals(creation.Type, declaring):
+                        return adapter;
+                }
+            }
+
+            return null;
         }
 
         /// <summary>A resolved surface type by metadata name.</summary>

@@ -80,11 +80,11 @@ public class RulesTableTests
     {
         foreach (var entry in RulesTable.Entries.Where(e => e.Key.StartsWith("temperance.", StringComparison.Ordinal)))
         {
-            if (entry.Key.EndsWith(".unset_means_default", StringComparison.Ordinal))
+            if (entry.Key.EndsWith(".unset_means_default", StringComparison.Ordinal) || entry.Key.EndsWith(".drops_bag_keys", StringComparison.Ordinal))
             {
                 Assert.True(bool.TryParse(entry.Value, out _), entry.Key);
             }
-            else if (!entry.Key.StartsWith("temperance.model.", StringComparison.Ordinal))
+            else if (!entry.Key.StartsWith("temperance.model.", StringComparison.Ordinal) && !entry.Key.EndsWith(".drops", StringComparison.Ordinal))
             {
                 Assert.True(double.TryParse(entry.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out _), entry.Key);
             }

@@ -42,7 +42,7 @@ public class MicrosoftExtensionsAISurfaceTests
 
             class Concierge
             {
-                ChatOptions Options() => new ChatOptions { Temperature = 0.7f, TopP = 0.95f, TopK = 40, Seed = 42, ModelId = "gpt-4o-mini" };
+                ChatOptions Options() => new ChatOptions { Temperature = 0.7f, TopK = 40, Seed = 42, ModelId = "gpt-4o-mini" };
             }
             """);
     }
