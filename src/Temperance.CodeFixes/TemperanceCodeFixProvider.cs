@@ -76,8 +76,7 @@ namespace Temperance.CodeFixes
                     root.ReplaceNode(value, SyntaxFactory.ParseExpression(edit.Literal).WithTriviaFrom(value)),
                 FixProperties.AddMember when FindCreation(node) is { } creation =>
                     root.ReplaceNode(creation, AddMember(creation, edit)),
-                FixProperties.RemoveMember when Removable(node) is { } removable =>
-                    root.RemoveNode(removable, SyntaxRemoveOptions.KeepExteriorTrivia | SyntaxRemoveOptions.KeepDirectives) ?? root,
+                FixProperties.RemoveMember when Removable(node) is { } removable => Remove(root, removable),
                 FixProperties.AddArgument when node.DescendantNodesAndSelf().OfType<InvocationExpressionSyntax>().FirstOrDefault() is { } call =>
                     root.ReplaceNode(call, AddArgument(call, edit)),
                 _ => root,
@@ -109,6 +108,68 @@ namespace Temperance.CodeFixes
             }
 
             return null;
+        }
+
+        /// <summary>Removes a list element or a statement and leaves the surrounding layout and comments as they were.</summary>
+        private static SyntaxNode Remove(SyntaxNode root, SyntaxNode removable)
+        {
+            switch (removable.Parent)
+            {
+                case InitializerExpressionSyntax initializer:
+                    return root.ReplaceNode(initializer, initializer.WithExpressions(WithoutElement(initializer.Expressions, (ExpressionSyntax)removable)));
+                case AnonymousObjectCreationExpressionSyntax anonymous:
+                    return root.ReplaceNode(anonymous, anonymous.WithInitializers(WithoutElement(anonymous.Initializers, (AnonymousObjectMemberDeclaratorSyntax)removable)));
+            }
+
+            // A statement: comments on the lines above it stay, its own line goes.
+            var leading = removable.GetLeadingTrivia();
+            var lastLineEnd = -1;
+            for (var i = 0; i < leading.Count; i++)
+            {
+                if (leading[i].IsKind(SyntaxKind.EndOfLineTrivia))
+                {
+                    lastLineEnd = i;
+                }
+            }
+
+            var kept = leading.Take(lastLineEnd + 1).ToList();
+            var next = removable.GetLastToken().GetNextToken();
+            var tracked = root.TrackNodes(removable);
+            if (kept.Count > 0 && next != default)
+            {
+                var nextInTracked = tracked.FindToken(next.SpanStart);
+                tracked = tracked.ReplaceToken(nextInTracked, nextInTracked.WithLeadingTrivia(kept.Concat(nextInTracked.LeadingTrivia)));
+            }
+
+            var current = tracked.GetCurrentNode(removable);
+            return current == null ? root : tracked.RemoveNode(current, SyntaxRemoveOptions.KeepNoTrivia) ?? root;
+        }
+
+        private static SeparatedSyntaxList<T> WithoutElement<T>(SeparatedSyntaxList<T> list, T element)
+            where T : SyntaxNode
+        {
+            var index = list.IndexOf(element);
+            var items = list.ToList();
+            var separators = list.GetSeparators().ToList();
+            if (index < items.Count - 1 || separators.Count == items.Count)
+            {
+                // Not last (or a trailing comma follows it): the element goes with the comma after it.
+                items.RemoveAt(index);
+                separators.RemoveAt(index);
+            }
+            else
+            {
+                // Last without a trailing comma: the comma before it goes, and its trailing spacing moves to the new last element.
+                var trailing = items[index].GetTrailingTrivia();
+                items.RemoveAt(index);
+                if (index > 0)
+                {
+                    separators.RemoveAt(index - 1);
+                    items[index - 1] = items[index - 1].WithTrailingTrivia(trailing);
+                }
+            }
+
+            return SyntaxFactory.SeparatedList(items, separators);
         }
 
         private static BaseObjectCreationExpressionSyntax? FindCreation(SyntaxNode node) =>
