@@ -48,3 +48,4 @@ public static class Intake
     public static Task<ClientResult<ChatCompletion>> ExtractFareRules(string text) =>
         new ChatClient("o3-mini", new ApiKeyCredential("demo-key")).CompleteChatAsync(new List<ChatMessage> { new UserChatMessage(text) });
 }
+
