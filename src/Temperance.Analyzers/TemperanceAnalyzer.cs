@@ -56,21 +56,20 @@ namespace Temperance
                         return;
                     }
 
-                    var owner = end.OwningSymbol;
-                    var callContext = new CallContext(owner, owner.ContainingType, tests.IsTest(owner));
-                    var requests = RequestBuilder.Build(catalog, callContext, collector, end.OperationBlocks);
-                    if (requests.Count == 0)
-                    {
-                        return;
-                    }
-
-                    var tree = requests[0].Location.SourceTree;
+                    var tree = end.OperationBlocks.Length > 0 ? end.OperationBlocks[0].Syntax.SyntaxTree : null;
                     if (tree == null)
                     {
                         return;
                     }
 
                     var state = policies.GetOrAdd(tree, t => new TreeState(new TemperancePolicy(options.GetOptions(t), options.GlobalOptions)));
+                    var owner = end.OwningSymbol;
+                    var callContext = new CallContext(owner, owner.ContainingType, tests.IsTestContext(owner, state.Policy.TestAttributes));
+                    var requests = RequestBuilder.Build(catalog, callContext, collector, end.OperationBlocks);
+                    if (requests.Count == 0)
+                    {
+                        return;
+                    }
                     Judge(requests, state, end.ReportDiagnostic);
                 });
             });

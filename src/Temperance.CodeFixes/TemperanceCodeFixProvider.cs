@@ -1,3 +1,4 @@
+using System.Collections.Generic;
 using System.Collections.Immutable;
 using System.Composition;
 using System.Globalization;
@@ -26,7 +27,8 @@ namespace Temperance.CodeFixes
         public override ImmutableArray<string> FixableDiagnosticIds { get; } = ImmutableArray.Create(
             Descriptors.ValueOutOfRange.Id, Descriptors.ExtremeTemperature.Id,
             Descriptors.TemperatureAboveTaskCeiling.Id, Descriptors.CandidatesAtTemperatureZero.Id,
-            Descriptors.TemperatureAndTopPBothChanged.Id, Descriptors.InertSetting.Id, Descriptors.SettingRejectedOrDropped.Id);
+            Descriptors.TemperatureAndTopPBothChanged.Id, Descriptors.InertSetting.Id, Descriptors.SettingRejectedOrDropped.Id,
+            Descriptors.RandomSamplingInExactTest.Id, Descriptors.MissingSeed.Id);
 
         public override FixAllProvider GetFixAllProvider() => WellKnownFixAllProviders.BatchFixer;
 
@@ -40,22 +42,46 @@ namespace Temperance.CodeFixes
                     continue;
                 }
 
+                var edits = new List<Edit>();
                 for (var index = 0; index < count && index < diagnostic.AdditionalLocations.Count; index++)
                 {
                     if (Edit.TryRead(diagnostic, index, out var edit) && (edit.Kind != FixProperties.RemoveMember || context.Document.TryGetSyntaxRoot(out var root) is false
                         || Removable(root!.FindNode(edit.Span, getInnermostNodeForTie: true)) != null))
                     {
-                        context.RegisterCodeFix(
-                            CodeAction.Create(edit.Title, ct => ApplyAsync(context.Document, edit, ct), FixProperties.Key(diagnostic.Id, edit.Kind, index)),
-                            diagnostic);
+                        edits.Add(edit);
                     }
+                }
+
+                if (edits.Count == 0)
+                {
+                    continue;
+                }
+
+                if (diagnostic.Properties.TryGetValue(FixProperties.Combine, out var combine) && combine == "true")
+                {
+                    var title = string.Join(" and ", edits.Select(e => e.Title));
+                    context.RegisterCodeFix(
+                        CodeAction.Create(title, ct => ApplyAsync(context.Document, edits, ct), FixProperties.Key(diagnostic.Id, "Combined", 0)),
+                        diagnostic);
+                    continue;
+                }
+
+                foreach (var edit in edits)
+                {
+                    context.RegisterCodeFix(
+                        CodeAction.Create(edit.Title, ct => ApplyAsync(context.Document, new[] { edit }, ct), FixProperties.Key(diagnostic.Id, edit.Kind, edit.Index)),
+                        diagnostic);
                 }
             }
 
             return Task.CompletedTask;
         }
 
-        private static async Task<Document> ApplyAsync(Document document, Edit edit, CancellationToken cancellationToken)
+        /// <summary>
+        /// Applies the edits in order. Targets are marked with annotations first, so an edit inside another edit's target
+        /// (a value inside the creation that also gets a member) is still found after the first change.
+        /// </summary>
+        private static async Task<Document> ApplyAsync(Document document, IReadOnlyList<Edit> edits, CancellationToken cancellationToken)
         {
             var root = await document.GetSyntaxRootAsync(cancellationToken).ConfigureAwait(false);
             if (root == null)
@@ -63,25 +89,131 @@ namespace Temperance.CodeFixes
                 return document;
             }
 
-            var node = root.FindNode(edit.Span, getInnermostNodeForTie: true);
-            // The outermost expression with exactly the span (an argument or parenthesis around it is not the value).
-            while (node.Parent is ExpressionSyntax && node.Parent.Span == edit.Span)
+            var marks = new Dictionary<SyntaxNode, SyntaxAnnotation>();
+            var targets = new List<(Edit Edit, SyntaxAnnotation Mark)>();
+            foreach (var edit in edits)
             {
-                node = node.Parent;
+                if (Target(root, edit) is not { } target)
+                {
+                    continue;
+                }
+
+                if (!marks.TryGetValue(target, out var mark))
+                {
+                    mark = new SyntaxAnnotation("Temperance.Target");
+                    marks[target] = mark;
+                }
+
+                targets.Add((edit, mark));
             }
 
-            var replaced = edit.Kind switch
+            root = root.ReplaceNodes(marks.Keys, (original, rewritten) => rewritten.WithAdditionalAnnotations(marks[original]));
+            var experimental = new List<(string Id, SyntaxAnnotation Mark)>();
+            foreach (var (edit, mark) in targets)
             {
-                FixProperties.SetValue when node is ExpressionSyntax value =>
-                    root.ReplaceNode(value, SyntaxFactory.ParseExpression(edit.Literal).WithTriviaFrom(value)),
-                FixProperties.AddMember when FindCreation(node) is { } creation =>
-                    root.ReplaceNode(creation, AddMember(creation, edit)),
-                FixProperties.RemoveMember when Removable(node) is { } removable => Remove(root, removable),
-                FixProperties.AddArgument when node.DescendantNodesAndSelf().OfType<InvocationExpressionSyntax>().FirstOrDefault() is { } call =>
-                    root.ReplaceNode(call, AddArgument(call, edit)),
-                _ => root,
-            };
-            return document.WithSyntaxRoot(replaced);
+                var node = root.GetAnnotatedNodes(mark).FirstOrDefault();
+                if (node == null)
+                {
+                    continue;
+                }
+
+                root = ApplyOne(root, node, edit);
+                if (edit.Experimental != null)
+                {
+                    experimental.Add((edit.Experimental, mark));
+                }
+            }
+
+            foreach (var (id, mark) in experimental)
+            {
+                if (root.GetAnnotatedNodes(mark).FirstOrDefault() is { } node)
+                {
+                    root = SuppressExperimental(root, node, id);
+                }
+            }
+
+            return document.WithSyntaxRoot(root);
+        }
+
+        private static SyntaxNode? Target(SyntaxNode root, Edit edit)
+        {
+            var node = root.FindNode(edit.Span, getInnermostNodeForTie: true);
+            switch (edit.Kind)
+            {
+                case FixProperties.SetValue:
+                    // The outermost expression with exactly the span (an argument or parenthesis around it is not the value).
+                    while (node.Parent is ExpressionSyntax && node.Parent.Span == edit.Span)
+                    {
+                        node = node.Parent;
+                    }
+
+                    return node as ExpressionSyntax;
+                case FixProperties.AddMember:
+                    return FindCreation(node);
+                case FixProperties.AddArgument:
+                    return node.DescendantNodesAndSelf().OfType<InvocationExpressionSyntax>().FirstOrDefault();
+                case FixProperties.RemoveMember:
+                    return Removable(node);
+                default:
+                    return null;
+            }
+        }
+
+        private static SyntaxNode ApplyOne(SyntaxNode root, SyntaxNode node, Edit edit) => edit.Kind switch
+        {
+            FixProperties.SetValue => root.ReplaceNode(node, SyntaxFactory.ParseExpression(edit.Literal).WithTriviaFrom(node).WithAdditionalAnnotations(node.GetAnnotations("Temperance.Target"))),
+            FixProperties.AddMember when node is BaseObjectCreationExpressionSyntax creation => root.ReplaceNode(creation, AddMember(creation, edit)),
+            FixProperties.AddArgument when node is InvocationExpressionSyntax call => root.ReplaceNode(call, AddArgument(call, edit)),
+            FixProperties.RemoveMember => Remove(root, node),
+            _ => root,
+        };
+
+        /// <summary>
+        /// The edit used an [Experimental] member (OpenAI's Seed raises OPENAI001, an error by default): wrap the narrowest
+        /// statement or member in a pragma, with the reason, so the fixed code still compiles.
+        /// </summary>
+        private static SyntaxNode SuppressExperimental(SyntaxNode root, SyntaxNode node, string id)
+        {
+            SyntaxNode? scope = node.AncestorsAndSelf().FirstOrDefault(n => n is StatementSyntax && n is not BlockSyntax)
+                ?? node.AncestorsAndSelf().FirstOrDefault(n => n is MemberDeclarationSyntax);
+            if (scope == null)
+            {
+                return root;
+            }
+
+            var leading = scope.GetLeadingTrivia();
+            var indentation = leading.Count > 0 && leading[leading.Count - 1].IsKind(SyntaxKind.WhitespaceTrivia) ? leading[leading.Count - 1] : default;
+            var before = indentation == default ? leading : SyntaxFactory.TriviaList(leading.Take(leading.Count - 1));
+            var newline = SyntaxFactory.ElasticCarriageReturnLineFeed;
+            var disable = SyntaxFactory.ParseLeadingTrivia($"#pragma warning disable {id} // {id}: the SDK marks this member experimental; set for reproducible runs\n");
+            var restore = SyntaxFactory.ParseLeadingTrivia($"#pragma warning restore {id}\n");
+
+            var newLeading = before;
+            if (indentation != default)
+            {
+                newLeading = newLeading.Add(indentation);
+            }
+
+            newLeading = newLeading.AddRange(disable);
+            if (indentation != default)
+            {
+                newLeading = newLeading.Add(indentation);
+            }
+
+            var trailing = scope.GetTrailingTrivia();
+            if (!trailing.Any(t => t.IsKind(SyntaxKind.EndOfLineTrivia)))
+            {
+                trailing = trailing.Add(newline);
+            }
+
+            var newTrailing = trailing;
+            if (indentation != default)
+            {
+                newTrailing = newTrailing.Add(indentation);
+            }
+
+            newTrailing = newTrailing.AddRange(restore);
+            return root.ReplaceNode(scope, scope.WithLeadingTrivia(newLeading).WithTrailingTrivia(newTrailing));
         }
 
         /// <summary>
@@ -178,12 +310,23 @@ namespace Temperance.CodeFixes
         /// <summary><c>new X { A = 1 }</c> becomes <c>new X { A = 1, Temperature = 0.0f }</c>; a wrapper adds <c>Options = new T { … }</c>.</summary>
         private static SyntaxNode AddMember(BaseObjectCreationExpressionSyntax creation, Edit edit)
         {
-            ExpressionSyntax assignment = Assign(edit.Member, SyntaxFactory.ParseExpression(edit.Literal));
+            var assignments = edit.Assignments;
             if (edit.Wrapper != null && edit.TypeName != null)
             {
-                assignment = Assign(edit.Wrapper, NewWithMember(edit.TypeName, edit.Member, edit.Literal));
+                assignments = new[] { (edit.Wrapper, (ExpressionSyntax)NewWithMembers(edit.TypeName, edit.Assignments)) };
             }
 
+            var result = creation;
+            foreach (var (member, value) in assignments)
+            {
+                result = AddOneMember(result, Assign(member, value));
+            }
+
+            return result;
+        }
+
+        private static BaseObjectCreationExpressionSyntax AddOneMember(BaseObjectCreationExpressionSyntax creation, ExpressionSyntax assignment)
+        {
             var initializer = creation.Initializer;
             if (initializer == null)
             {
@@ -192,7 +335,7 @@ namespace Temperance.CodeFixes
                 if (creation is ObjectCreationExpressionSyntax { ArgumentList.Arguments.Count: 0 } explicitCreation)
                 {
                     return explicitCreation.WithArgumentList(null).WithType(explicitCreation.Type.WithTrailingTrivia(SyntaxFactory.Space))
-                        .WithInitializer(fresh).WithAdditionalAnnotations(Formatter.Annotation);
+                        .WithInitializer(fresh.WithTrailingTrivia(explicitCreation.GetTrailingTrivia())).WithAdditionalAnnotations(Formatter.Annotation);
                 }
 
                 return creation.WithInitializer(fresh).WithAdditionalAnnotations(Formatter.Annotation);
@@ -236,16 +379,16 @@ namespace Temperance.CodeFixes
         /// <summary><c>client.Send(x)</c> becomes <c>client.Send(x, options: new Options { Temperature = 0.0f })</c>.</summary>
         private static SyntaxNode AddArgument(InvocationExpressionSyntax call, Edit edit)
         {
-            var argument = SyntaxFactory.Argument(NewWithMember(edit.TypeName!, edit.Member, edit.Literal))
+            var argument = SyntaxFactory.Argument(NewWithMembers(edit.TypeName!, edit.Assignments))
                 .WithNameColon(SyntaxFactory.NameColon(SyntaxFactory.IdentifierName(edit.Parameter!)));
             return call.WithArgumentList(call.ArgumentList.AddArguments(argument)).WithAdditionalAnnotations(Formatter.Annotation);
         }
 
-        private static ExpressionSyntax NewWithMember(string typeName, string member, string literal) =>
+        private static ObjectCreationExpressionSyntax NewWithMembers(string typeName, IReadOnlyList<(string Member, ExpressionSyntax Value)> assignments) =>
             SyntaxFactory.ObjectCreationExpression(SyntaxFactory.ParseTypeName(typeName).WithAdditionalAnnotations(Simplifier.Annotation).WithTrailingTrivia(SyntaxFactory.Space))
                 .WithInitializer(SyntaxFactory.InitializerExpression(
                     SyntaxKind.ObjectInitializerExpression,
-                    SyntaxFactory.SingletonSeparatedList<ExpressionSyntax>(Assign(member, SyntaxFactory.ParseExpression(literal)))))
+                    SyntaxFactory.SeparatedList<ExpressionSyntax>(assignments.Select(a => Assign(a.Member, a.Value)))))
                 .WithAdditionalAnnotations(Formatter.Annotation);
 
         private static AssignmentExpressionSyntax Assign(string member, ExpressionSyntax value) =>
@@ -279,11 +422,20 @@ namespace Temperance.CodeFixes
             public string? Wrapper { get; private set; }
             public string? TypeName { get; private set; }
             public string? Parameter { get; private set; }
+            public int Index { get; private set; }
+            public string? Experimental { get; private set; }
+            public IReadOnlyList<(string Member, string Literal)> Extras { get; private set; } = System.Array.Empty<(string, string)>();
+
+            /// <summary>The member assignments an AddMember/AddArgument writes: the main one, then the extras.</summary>
+            public IReadOnlyList<(string Member, ExpressionSyntax Value)> Assignments =>
+                new[] { (Member, Literal) }.Concat(Extras).Select(a => (a.Item1, SyntaxFactory.ParseExpression(a.Item2))).ToList();
+
+            private string AssignmentText => string.Join(", ", new[] { (Member, Literal) }.Concat(Extras).Select(a => $"{a.Item1} = {a.Item2}"));
 
             public string Title => Kind switch
             {
-                FixProperties.AddMember => $"Add {Member} = {Literal}",
-                FixProperties.AddArgument => $"Pass options with {Member} = {Literal}",
+                FixProperties.AddMember => $"Add {AssignmentText}",
+                FixProperties.AddArgument => $"Pass options with {AssignmentText}",
                 FixProperties.RemoveMember => $"Remove {Member}",
                 _ => $"Set {Member} to {Literal}",
             };
@@ -306,6 +458,21 @@ namespace Temperance.CodeFixes
                 properties.TryGetValue(FixProperties.Wrapper(index), out var wrapper);
                 properties.TryGetValue(FixProperties.TypeName(index), out var typeName);
                 properties.TryGetValue(FixProperties.Parameter(index), out var parameter);
+                properties.TryGetValue(FixProperties.Experimental(index), out var experimental);
+                var extras = new List<(string, string)>();
+                if (properties.TryGetValue(FixProperties.Extra(index), out var extraText) && !string.IsNullOrEmpty(extraText))
+                {
+                    foreach (var entry in extraText!.Split(';'))
+                    {
+                        var parts = entry.Split('|');
+                        if (parts.Length == 3 && System.Enum.TryParse<NumericKind>(parts[1], out var extraKind)
+                            && double.TryParse(parts[2], NumberStyles.Float, CultureInfo.InvariantCulture, out var extraValue)
+                            && TryFormat(extraValue, extraKind, out var extraLiteral))
+                        {
+                            extras.Add((parts[0], extraLiteral));
+                        }
+                    }
+                }
                 if (kind == FixProperties.AddArgument && (parameter == null || typeName == null))
                 {
                     return false;
@@ -320,6 +487,9 @@ namespace Temperance.CodeFixes
                     Wrapper = wrapper,
                     TypeName = typeName,
                     Parameter = parameter,
+                    Index = index,
+                    Experimental = experimental,
+                    Extras = extras,
                 };
                 return true;
             }

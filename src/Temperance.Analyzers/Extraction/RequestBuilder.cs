@@ -18,6 +18,7 @@ namespace Temperance.Extraction
         private readonly SurfaceCatalog catalog;
         private readonly CallContext context;
         private readonly List<Instance> instances = new List<Instance>();
+        private readonly Dictionary<Request, IInvocationOperation> sends = new Dictionary<Request, IInvocationOperation>();
 
         private readonly IReadOnlyList<IOperation> blocks;
 
@@ -55,6 +56,25 @@ namespace Temperance.Extraction
                 return System.Array.Empty<Request>();
             }
 
+            // In a test: does the model's output reach an exact assertion, and is the client a real one?
+            if (context.IsTest)
+            {
+                var allSends = new HashSet<IOperation>(builder.sends.Values);
+                foreach (var instance in requests)
+                {
+                    if (builder.sends.TryGetValue(instance.Request, out var send))
+                    {
+                        if (OutputFlow.FindExactAssertion(send, blocks, allSends) is { } assertion)
+                        {
+                            instance.Request.ExactAssertion = assertion.Description;
+                            instance.Request.ExactAssertionLocation = assertion.Location;
+                        }
+
+                        instance.Request.ClientIsTestDouble = builder.IsTestDouble(Receiver(send), 0);
+                    }
+                }
+            }
+
             // Task signals are read once per block and shared by its requests; names differ per holder.
             var annotation = TaskSignalReader.Annotation(context.Member);
             var prompts = TaskSignalReader.FromPrompts(blocks).ToList();
@@ -84,7 +104,8 @@ namespace Temperance.Extraction
 
                     var request = NewRequest(surface, creation, originVisible: true);
                     ReadInitializer(surface, objectCreation.Initializer, request);
-                    request.TemperatureTarget ??= TemperatureTargetOf(objectCreation, surface);
+                    AddTargets(request, objectCreation, surface);
+                    request.SeedAvailable = SeedAvailable(surface, objectCreation.Type);
                     Track(new Instance(request, creation, HolderOf(creation)));
                     return;
 
@@ -202,6 +223,7 @@ namespace Temperance.Extraction
                     instance.Request.SendingCall = method;
                     instance.Request.SendingCallLocation = invocation.Syntax.GetLocation();
                     instance.Request.ClientModelId = ClientModel(Receiver(invocation), 0);
+                    sends[instance.Request] = invocation;
                     if (ClientAdapter(Receiver(invocation), 0) is { } adapter)
                     {
                         instance.Request.Adapter = adapter.Name;
@@ -254,14 +276,21 @@ namespace Temperance.Extraction
             if (omitted?.Type is INamedTypeSymbol optionsType)
             {
                 var concrete = optionsType.OriginalDefinition.SpecialType == SpecialType.System_Nullable_T ? (INamedTypeSymbol)optionsType.TypeArguments[0] : optionsType;
-                if (concrete.TypeKind == TypeKind.Class && !concrete.IsAbstract && TemperatureMember(concrete, surface) is { } member)
+                if (concrete.TypeKind == TypeKind.Class && !concrete.IsAbstract)
                 {
                     request.OmittedOptionsType = concrete.WithNullableAnnotation(NullableAnnotation.NotAnnotated).ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat);
-                    request.OmittedTemperatureMember = member.Name;
-                    request.OmittedTemperatureKind = member.Kind;
+                    foreach (var setting in new[] { Setting.Temperature, Setting.Seed })
+                    {
+                        if (MemberFor(concrete, surface, setting) is { } member)
+                        {
+                            request.OmittedMembers[setting] = new MemberTarget(invocation.Syntax, member.Name, member.Kind, null, null, member.Experimental);
+                        }
+                    }
                 }
             }
             request.ClientModelId = ClientModel(Receiver(invocation), 0);
+            request.SeedAvailable = SeedAvailable(surface, null);
+            sends[request] = invocation;
             if (invocation.TargetMethod.IsGenericMethod && invocation.TargetMethod.TypeArguments.Length == 1)
             {
                 request.ResponseShape = ResponseShape.Structured;
@@ -347,6 +376,29 @@ namespace Temperance.Extraction
             return catalog.AdapterCreatedBy(operation);
         }
 
+        /// <summary>A client whose concrete type is declared in the user's own code (a fake IChatClient): sampling means nothing there.</summary>
+        private bool IsTestDouble(IOperation? client, int depth)
+        {
+            if (client == null || depth > 4)
+            {
+                return false;
+            }
+
+            var operation = client;
+            while (operation is IConversionOperation conversion)
+            {
+                operation = conversion.Operand;
+            }
+
+            if (operation is ILocalReferenceOperation local && LocalInitializer(local.Local) is { } initializer)
+            {
+                return IsTestDouble(initializer, depth + 1);
+            }
+
+            var type = operation is IObjectCreationOperation creation ? creation.Type : operation.Type;
+            return type is INamedTypeSymbol named && named.TypeKind == TypeKind.Class && named.Locations.Any(l => l.IsInSource);
+        }
+
         private IOperation? LocalInitializer(ILocalSymbol local)
         {
             foreach (var block in blocks)
@@ -426,16 +478,48 @@ namespace Temperance.Extraction
         /// Where an unset temperature can be added: this creation when its type has a temperature member; for a container
         /// (Ollama ChatRequest, LLamaSharp InferenceParams) a new nested options object.
         /// </summary>
-        private MemberTarget? TemperatureTargetOf(IObjectCreationOperation creation, SurfaceDefinition surface)
+        private void AddTargets(Request request, IObjectCreationOperation creation, SurfaceDefinition surface)
+        {
+            foreach (var setting in new[] { Setting.Temperature, Setting.Seed })
+            {
+                if (!request.AddTargets.ContainsKey(setting) && TargetOf(creation, surface, setting) is { } target)
+                {
+                    request.AddTargets[setting] = target;
+                }
+            }
+        }
+
+        /// <summary>True when the surface, or the options it nests, has a seed member or key.</summary>
+        private bool SeedAvailable(SurfaceDefinition surface, ITypeSymbol? type)
+        {
+            if (surface.Members.ContainsValue(Setting.Seed) || surface.Keys.ContainsValue(Setting.Seed))
+            {
+                return true;
+            }
+
+            foreach (var nested in surface.NestedMembers)
+            {
+                var nestedType = surface.NestedConcreteTypes.TryGetValue(nested, out var concrete) ? catalog.TypeOf(concrete)
+                    : type == null ? null : FindProperty(type, nested)?.Type;
+                if (catalog.Find(nestedType) is { } nestedSurface && (nestedSurface.Members.ContainsValue(Setting.Seed) || nestedSurface.Keys.ContainsValue(Setting.Seed)))
+                {
+                    return true;
+                }
+            }
+
+            return false;
+        }
+
+        private MemberTarget? TargetOf(IObjectCreationOperation creation, SurfaceDefinition surface, Setting setting)
         {
             if (creation.Type == null)
             {
                 return null;
             }
 
-            if (TemperatureMember(creation.Type, surface) is { } own)
+            if (MemberFor(creation.Type, surface, setting) is { } own)
             {
-                return new MemberTarget(creation.Syntax, own.Name, own.Kind, null, null);
+                return new MemberTarget(creation.Syntax, own.Name, own.Kind, null, null, own.Experimental);
             }
 
             foreach (var nestedName in surface.NestedMembers)
@@ -447,24 +531,42 @@ namespace Temperance.Extraction
                 }
 
                 if (nestedType != null && catalog.Find(nestedType) is { } nestedSurface
-                    && TemperatureMember(nestedType, nestedSurface) is { } nested && nestedType.TypeKind == TypeKind.Class && !nestedType.IsAbstract)
+                    && MemberFor(nestedType, nestedSurface, setting) is { } nested && nestedType.TypeKind == TypeKind.Class && !nestedType.IsAbstract)
                 {
-                    return new MemberTarget(creation.Syntax, nested.Name, nested.Kind, nestedName, nestedType.ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat));
+                    return new MemberTarget(creation.Syntax, nested.Name, nested.Kind, nestedName, nestedType.ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat), nested.Experimental);
                 }
             }
 
             return null;
         }
 
-        /// <summary>The temperature member of a surface type, with the literal type it takes.</summary>
-        private static (string Name, NumericKind Kind)? TemperatureMember(ITypeSymbol type, SurfaceDefinition surface)
+        /// <summary>The member of a surface type that carries a setting, with its literal type and experimental id.</summary>
+        private static (string Name, NumericKind Kind, string? Experimental)? MemberFor(ITypeSymbol type, SurfaceDefinition surface, Setting setting)
         {
             foreach (var pair in surface.Members)
             {
-                if (pair.Value == Setting.Temperature && FindProperty(type, pair.Key) is { } property && property.SetMethod != null
+                if (pair.Value == setting && FindProperty(type, pair.Key) is { } property && property.SetMethod != null
                     && ValueReader.KindOfType(property.Type) is { } kind)
                 {
-                    return (pair.Key, kind);
+                    return (pair.Key, kind, ExperimentalId(property));
+                }
+            }
+
+            return null;
+        }
+
+        /// <summary>The diagnostic id of [Experimental("ID")] on a member or its type.</summary>
+        private static string? ExperimentalId(ISymbol symbol)
+        {
+            for (var current = symbol; current != null; current = current.ContainingType)
+            {
+                foreach (var attribute in current.GetAttributes())
+                {
+                    if (attribute.AttributeClass?.Name == "ExperimentalAttribute" && attribute.ConstructorArguments.Length > 0
+                        && attribute.ConstructorArguments[0].Value is string id)
+                    {
+                        return id;
+                    }
                 }
             }
 
@@ -623,7 +725,7 @@ namespace Temperance.Extraction
                 if (ValueReader.Unwrap(value) is IObjectCreationOperation child && catalog.Find(child.Type) is { } childSurface)
                 {
                     ReadInitializer(childSurface, child.Initializer, request);
-                    request.TemperatureTarget ??= TemperatureTargetOf(child, childSurface);
+                    AddTargets(request, child, childSurface);
                 }
             }
             else if (name == surface.BagMember && ValueReader.Unwrap(value) is IObjectCreationOperation { Initializer: { } bagInitializer })

@@ -40,14 +40,64 @@ namespace Temperance.Extraction
         }
 
         /// <summary>True for a method carrying a test attribute (or one derived from it, such as Theory from Fact).</summary>
-        public bool IsTest(ISymbol? member)
+        public bool IsTest(ISymbol? member) => IsTest(member, System.Array.Empty<string>());
+
+        /// <summary>
+        /// A test method (framework attributes, or the team's own from <c>temperance.test_attributes</c>), or a helper of
+        /// a test class that a test in the same class calls by name.
+        /// </summary>
+        public bool IsTestContext(ISymbol? member, IReadOnlyCollection<string> extraAttributes)
         {
-            if (attributes.Count == 0 || member is not IMethodSymbol method)
+            if (IsTest(member, extraAttributes))
+            {
+                return true;
+            }
+
+            if (member is not IMethodSymbol { MethodKind: MethodKind.Ordinary } helper || helper.ContainingType == null)
             {
                 return false;
             }
 
-            return method.GetAttributes().Any(a => Derives(a.AttributeClass));
+            foreach (var candidate in helper.ContainingType.GetMembers().OfType<IMethodSymbol>())
+            {
+                if (!IsTest(candidate, extraAttributes))
+                {
+                    continue;
+                }
+
+                foreach (var reference in candidate.DeclaringSyntaxReferences)
+                {
+                    if (reference.GetSyntax().DescendantNodes().OfType<Microsoft.CodeAnalysis.CSharp.Syntax.IdentifierNameSyntax>()
+                        .Any(name => name.Identifier.ValueText == helper.Name))
+                    {
+                        return true;
+                    }
+                }
+            }
+
+            return false;
+        }
+
+        private bool IsTest(ISymbol? member, IReadOnlyCollection<string> extraAttributes)
+        {
+            if (member is not IMethodSymbol method || (attributes.Count == 0 && extraAttributes.Count == 0))
+            {
+                return false;
+            }
+
+            return method.GetAttributes().Any(a => Derives(a.AttributeClass) || IsExtra(a.AttributeClass, extraAttributes));
+        }
+
+        private static bool IsExtra(INamedTypeSymbol? type, IReadOnlyCollection<string> names)
+        {
+            if (type == null || names.Count == 0)
+            {
+                return false;
+            }
+
+            var full = type.ToDisplayString();
+            var shortName = type.Name.EndsWith("Attribute", System.StringComparison.Ordinal) ? type.Name.Substring(0, type.Name.Length - "Attribute".Length) : type.Name;
+            return names.Any(n => n == full || n == type.Name || n == shortName);
         }
 
         private bool Derives(INamedTypeSymbol? type)

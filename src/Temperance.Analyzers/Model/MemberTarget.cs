@@ -8,14 +8,18 @@ namespace Temperance.Model
     /// </summary>
     internal sealed class MemberTarget
     {
-        public MemberTarget(SyntaxNode creation, string member, NumericKind kind, string? wrapperMember, string? wrapperType)
+        public MemberTarget(SyntaxNode creation, string member, NumericKind kind, string? wrapperMember, string? wrapperType, string? experimental = null)
         {
             Creation = creation;
             Member = member;
             Kind = kind;
             WrapperMember = wrapperMember;
             WrapperType = wrapperType;
+            Experimental = experimental;
         }
+
+        /// <summary>The diagnostic id of an [Experimental] member (OpenAI's Seed is OPENAI001): a fix must keep the code compiling.</summary>
+        public string? Experimental { get; }
 
         public SyntaxNode Creation { get; }
         public string Member { get; }

@@ -57,12 +57,22 @@ namespace Temperance.Model
         /// </summary>
         public bool IsImplicit { get; set; }
         public IParameterSymbol? OmittedParameter { get; set; }
-        /// <summary>Where a fix adds the temperature when it is unset; null when no such edit is possible.</summary>
-        public MemberTarget? TemperatureTarget { get; set; }
-        /// <summary>The options type a fix passes when the call has none (fully qualified), with its temperature member.</summary>
+        /// <summary>Where a fix adds an unset setting (temperature, seed); a setting missing here cannot be added.</summary>
+        public Dictionary<Setting, MemberTarget> AddTargets { get; } = new Dictionary<Setting, MemberTarget>();
+        public MemberTarget? TemperatureTarget => AddTargets.TryGetValue(Setting.Temperature, out var target) ? target : null;
+
+        /// <summary>The options type a fix passes when the call has none (fully qualified), and the members it can set.</summary>
         public string? OmittedOptionsType { get; set; }
-        public NumericKind OmittedTemperatureKind { get; set; }
-        public string? OmittedTemperatureMember { get; set; }
+        public Dictionary<Setting, MemberTarget> OmittedMembers { get; } = new Dictionary<Setting, MemberTarget>();
+
+        /// <summary>True when the surface can carry a seed at all (Anthropic and OpenAI Responses cannot).</summary>
+        public bool SeedAvailable { get; set; }
+
+        /// <summary>In a test: the exact assertion the model's output reaches ("Assert.Equal"), and where.</summary>
+        public string? ExactAssertion { get; set; }
+        public Location? ExactAssertionLocation { get; set; }
+        /// <summary>The client is a test double declared in the user's own code: sampling settings mean nothing.</summary>
+        public bool ClientIsTestDouble { get; set; }
 
         /// <summary>Task hints gathered by extraction: identifiers, prompt text, annotations. Policy turns them into a task.</summary>
         public List<TaskSignal> TaskSignals { get; } = new List<TaskSignal>();

@@ -19,6 +19,10 @@ namespace Temperance.Policy
         /// <summary><c>temperance.task.extraction.max_temperature</c>: the SAMP001 ceiling for that task.</summary>
         public static string TaskCeiling(string kind) => $"temperance.task.{kind}.max_temperature";
 
+        public const string TestSeed = "temperance.test_seed";
+        public const string RequireSeed = "temperance.require_seed";
+        public const string TestAttributes = "temperance.test_attributes";
+
         public const string CandidatesTemperature = "temperance.candidates_temperature";
 
         public static string UnsetMeansDefault(string provider) => $"temperance.provider.{provider}.unset_means_default";

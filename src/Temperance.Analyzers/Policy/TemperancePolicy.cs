@@ -92,6 +92,34 @@ namespace Temperance.Policy
         /// </summary>
         public bool UnsetMeansDefault(string provider) => Flag(OptionKeys.UnsetMeansDefault(provider)) ?? false;
 
+        /// <summary>The seed fixes write (<c>temperance.test_seed</c>).</summary>
+        public Limit? TestSeed => Number(OptionKeys.TestSeed);
+
+        /// <summary>Where SAMP003 asks for a seed: tests (default), always, or never.</summary>
+        public string RequireSeed
+        {
+            get
+            {
+                if (!TryGetRaw(OptionKeys.RequireSeed, out var raw) || raw.Length == 0)
+                {
+                    return "tests";
+                }
+
+                var value = raw.ToLowerInvariant();
+                if (value is "tests" or "always" or "never")
+                {
+                    return value;
+                }
+
+                AddProblem(new ConfigProblem(OptionKeys.RequireSeed, raw, "tests, always or never"));
+                return "never";
+            }
+        }
+
+        /// <summary>Extra test attributes from <c>temperance.test_attributes</c> (simple or full names).</summary>
+        public IReadOnlyCollection<string> TestAttributes =>
+            TryGetRaw(OptionKeys.TestAttributes, out var raw) ? Split(raw).ToArray() : Array.Empty<string>();
+
         /// <summary>The settings an IChatClient adapter drops (<c>temperance.adapter.&lt;name&gt;.drops</c>), and whether it ignores bag keys.</summary>
         public (IReadOnlyList<Setting> Drops, bool DropsBagKeys, string Key) AdapterDrops(string adapter)
         {

@@ -31,6 +31,13 @@ namespace Temperance.Rules
         public static string Wrapper(int index) => $"Temperance.Wrapper.{index}";
         public static string TypeName(int index) => $"Temperance.Type.{index}";
         public static string Parameter(int index) => $"Temperance.Parameter.{index}";
+        /// <summary>More assignments for the same edit, "Member|Kind|Value" joined by ';' (temperature and seed together).</summary>
+        public static string Extra(int index) => $"Temperance.Extra.{index}";
+        /// <summary>Experimental-API diagnostic the edited code raises (OPENAI001): the fix wraps the statement in a pragma.</summary>
+        public static string Experimental(int index) => $"Temperance.Experimental.{index}";
+
+        /// <summary>"true" when all edits form one code action (SAMP002 sets temperature and seed together).</summary>
+        public const string Combine = "Temperance.Combine";
 
         /// <summary>Equivalence key of edit <paramref name="index"/> of a rule, reused by tests and Fix All.</summary>
         public static string Key(string diagnosticId, string edit, int index) => $"Temperance.{edit}.{diagnosticId}.{index}";
@@ -71,13 +78,47 @@ namespace Temperance.Rules
             return this;
         }
 
-        public FixPlan AddArgument(SyntaxNode call, string parameter, string optionsType, string member, double value, NumericKind kind)
+        public FixPlan AddArgument(Location call, string parameter, string optionsType, string member, double value, NumericKind kind)
         {
-            var index = Add(FixProperties.AddArgument, call.GetLocation(), value, kind, member);
+            var index = Add(FixProperties.AddArgument, call, value, kind, member);
             properties[FixProperties.Parameter(index)] = parameter;
             properties[FixProperties.TypeName(index)] = optionsType;
             return this;
         }
+
+        /// <summary>Adds another assignment to the last edit (an AddMember or AddArgument), and its experimental id if any.</summary>
+        public FixPlan AlsoAssign(string member, NumericKind kind, double value, string? experimental)
+        {
+            var index = locations.Count - 1;
+            var entry = $"{member}|{kind}|{value.ToString("R", CultureInfo.InvariantCulture)}";
+            properties.TryGetValue(FixProperties.Extra(index), out var existing);
+            properties[FixProperties.Extra(index)] = string.IsNullOrEmpty(existing) ? entry : existing + ";" + entry;
+            if (experimental != null)
+            {
+                properties[FixProperties.Experimental(index)] = experimental;
+            }
+
+            return this;
+        }
+
+        public FixPlan Experimental(string? id)
+        {
+            if (id != null && locations.Count > 0)
+            {
+                properties[FixProperties.Experimental(locations.Count - 1)] = id;
+            }
+
+            return this;
+        }
+
+        /// <summary>All edits are applied as one code action.</summary>
+        public FixPlan Combined()
+        {
+            properties[FixProperties.Combine] = "true";
+            return this;
+        }
+
+        public int Count => locations.Count;
 
         public ImmutableArray<Location> Locations => locations.ToImmutableArray();
 

@@ -15,6 +15,8 @@ namespace Temperance.Rules
                 ExtremeTemperatureRule.Evaluate,
                 TaskCeilingRule.Evaluate,
                 CandidatesAtZeroRule.Evaluate,
+                RandomSamplingInTestRule.Evaluate,
+                MissingSeedRule.Evaluate,
                 RejectedSettingRule.Evaluate,
                 TemperatureAndTopPRule.Evaluate,
                 InertSettingRule.Evaluate,

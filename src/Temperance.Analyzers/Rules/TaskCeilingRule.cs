@@ -50,10 +50,10 @@ namespace Temperance.Rules
                     {
                         fix.AddMember(member.Creation, member.Member, target, member.Kind, member.WrapperMember, member.WrapperType);
                     }
-                    else if (request.IsImplicit && request.OmittedParameter != null && request.OmittedOptionsType != null && request.SendingCallLocation != null)
+                    else if (request.IsImplicit && request.OmittedParameter != null && request.OmittedOptionsType != null
+                        && request.SendingCallLocation != null && request.OmittedMembers.TryGetValue(Setting.Temperature, out var omitted))
                     {
-                        fix.AddArgument(request.SendingCallLocation.SourceTree!.GetRoot().FindNode(request.SendingCallLocation.SourceSpan),
-                            request.OmittedParameter.Name, request.OmittedOptionsType, request.OmittedTemperatureMember!, target, request.OmittedTemperatureKind);
+                        fix.AddArgument(request.SendingCallLocation, request.OmittedParameter.Name, request.OmittedOptionsType, omitted.Member, target, omitted.Kind);
                     }
 
                     yield return new Finding(

@@ -19,6 +19,8 @@ public static class TestReferences
         "Microsoft.Extensions.DependencyInjection.Abstractions", "Microsoft.Extensions.Logging.Abstractions",
         "Microsoft.Extensions.VectorData.Abstractions", "Microsoft.Bcl.AsyncInterfaces", "Microsoft.Bcl.HashCode",
         "xunit.assert", "xunit.core", "xunit.abstractions",
+        "nunit.framework", "nunit.framework.legacy", "MSTest.TestFramework", "Microsoft.VisualStudio.TestPlatform.TestFramework",
+        "AwesomeAssertions", "FluentAssertions", "Shouldly", "Snapshooter", "Snapshooter.Xunit",
     };
 
     public static readonly ImmutableArray<MetadataReference> Sdks = LoadSdks();

@@ -12,7 +12,7 @@ public sealed class TemperanceTest : CSharpCodeFixTest<TemperanceAnalyzer, Tempe
     /// <summary>Experimental-API diagnostics of the SDKs (errors by default); snippets are about sampling, not those.</summary>
     private static readonly string[] SdkExperimentalIds = { "OPENAI001", "SCME0001", "SCME0002", "SKEXP0001", "SKEXP0010", "MEAI001", "AOAI001" };
 
-    public TemperanceTest(string source, string? editorConfig = null, string? fixedSource = null)
+    public TemperanceTest(string source, string? editorConfig = null, string? fixedSource = null, bool suppressSdkExperimental = true)
     {
         ReferenceAssemblies = new ReferenceAssemblies("net10.0");
         TestState.AdditionalReferences.AddRange(TestReferences.All);
@@ -29,8 +29,11 @@ public sealed class TemperanceTest : CSharpCodeFixTest<TemperanceAnalyzer, Tempe
         }
 
         // Through a global config rather than compilation options, so per-file severities from .editorconfig still apply.
-        TestState.AnalyzerConfigFiles.Add(("/.sdk-experimental.globalconfig",
-            "is_global = true\n" + string.Concat(SdkExperimentalIds.Select(id => $"dotnet_diagnostic.{id}.severity = none\n"))));
+        if (suppressSdkExperimental)
+        {
+            TestState.AnalyzerConfigFiles.Add(("/.sdk-experimental.globalconfig",
+                "is_global = true\n" + string.Concat(SdkExperimentalIds.Select(id => $"dotnet_diagnostic.{id}.severity = none\n"))));
+        }
     }
 }
 

@@ -84,6 +84,10 @@ public class RulesTableTests
             {
                 Assert.True(bool.TryParse(entry.Value, out _), entry.Key);
             }
+            else if (entry.Key == "temperance.require_seed")
+            {
+                Assert.Contains(entry.Value, new[] { "tests", "always", "never" });
+            }
             else if (!entry.Key.StartsWith("temperance.model.", StringComparison.Ordinal) && !entry.Key.EndsWith(".drops", StringComparison.Ordinal))
             {
                 Assert.True(double.TryParse(entry.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out _), entry.Key);

@@ -79,7 +79,8 @@ public class SAMP001Tests
             class Reviews
             {
                 [LlmTask("evaluation")]
-                OpenAIPromptExecutionSettings SummarizeAndGrade() => new OpenAIPromptExecutionSettings { {|SAMP001:Temperature = 0.3|} };
+                // An evaluation task must also be seeded (SAMP003).
+                OpenAIPromptExecutionSettings SummarizeAndGrade() => {|SAMP003:new OpenAIPromptExecutionSettings { {|SAMP001:Temperature = 0.3|} }|};
             }
             """);
     }

@@ -1,0 +1,56 @@
+using System.Collections.Generic;
+using Temperance.Model;
+using Temperance.Policy;
+
+namespace Temperance.Rules
+{
+    /// <summary>
+    /// SAMP003: no seed where a run must be reproducible: a test comparing exact output at temperature 0, an evaluation
+    /// (LLM-as-judge) task, or everywhere with <c>temperance.require_seed = always</c>. Only on surfaces that have a seed.
+    /// </summary>
+    internal static class MissingSeedRule
+    {
+        public static IEnumerable<Finding> Evaluate(Request request, TemperancePolicy policy)
+        {
+            var mode = policy.RequireSeed;
+            if (mode == "never" || !request.SeedAvailable || request.KindOf(Setting.Seed, out _) != ValueKind.Unset || request.ClientIsTestDouble)
+            {
+                yield break;
+            }
+
+            var temperatureKind = request.KindOf(Setting.Temperature, out var temperature);
+            string? why = null;
+            if (request.Context.IsTest && request.ExactAssertion != null && temperatureKind == ValueKind.Known && temperature == 0)
+            {
+                why = $"the test '{request.Context.Member?.Name}' compares its exact output with {request.ExactAssertion}";
+            }
+            else if (request.ExactAssertion == null && TaskInference.Infer(request, policy) is { Kind: "evaluation" } task)
+            {
+                why = $"an evaluation task, {task.Because}, must grade the same answer the same way";
+            }
+            else if (mode == "always" && !(request.Context.IsTest && request.ExactAssertion != null))
+            {
+                why = $"'{OptionKeys.RequireSeed} = always'";
+            }
+
+            if (why == null)
+            {
+                yield break; // in an exact test with random sampling, SAMP002 covers the seed
+            }
+
+            var seed = policy.TestSeed?.Value ?? 0;
+            var fix = new FixPlan();
+            if (request.AddTargets.TryGetValue(Setting.Seed, out var target))
+            {
+                fix.AddMember(target.Creation, target.Member, seed, target.Kind, target.WrapperMember, target.WrapperType).Experimental(target.Experimental);
+            }
+            else if (request.IsImplicit && request.OmittedParameter != null && request.OmittedOptionsType != null && request.SendingCallLocation != null
+                && request.OmittedMembers.TryGetValue(Setting.Seed, out var omitted))
+            {
+                fix.AddArgument(request.SendingCallLocation, request.OmittedParameter.Name, request.OmittedOptionsType, omitted.Member, seed, omitted.Kind).Experimental(omitted.Experimental);
+            }
+
+            yield return new Finding(Descriptors.MissingSeed, request.Location, fix, why, request.Surface);
+        }
+    }
+}
