@@ -61,16 +61,16 @@ namespace Temperance.CodeFixes
                 {
                     var title = string.Join(" and ", edits.Select(e => e.Title));
                     context.RegisterCodeFix(
-                        CodeAction.Create(title, ct => ApplyAsync(context.Document, edits, ct), FixProperties.Key(diagnostic.Id, "Combined", 0)),
+                        CodeAction.Create(title, ct => ApplyAsync(context.Document, edits, ct), FixProperties.PrimaryKey),
                         diagnostic);
                     continue;
                 }
 
-                foreach (var edit in edits)
+                for (var i = 0; i < edits.Count; i++)
                 {
-                    context.RegisterCodeFix(
-                        CodeAction.Create(edit.Title, ct => ApplyAsync(context.Document, new[] { edit }, ct), FixProperties.Key(diagnostic.Id, edit.Kind, edit.Index)),
-                        diagnostic);
+                    var edit = edits[i];
+                    var key = i == 0 ? FixProperties.PrimaryKey : FixProperties.Key(diagnostic.Id, edit.Kind, edit.Index);
+                    context.RegisterCodeFix(CodeAction.Create(edit.Title, ct => ApplyAsync(context.Document, new[] { edit }, ct), key), diagnostic);
                 }
             }
 

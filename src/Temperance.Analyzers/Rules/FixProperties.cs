@@ -39,7 +39,13 @@ namespace Temperance.Rules
         /// <summary>"true" when all edits form one code action (SAMP002 sets temperature and seed together).</summary>
         public const string Combine = "Temperance.Combine";
 
-        /// <summary>Equivalence key of edit <paramref name="index"/> of a rule, reused by tests and Fix All.</summary>
+        /// <summary>
+        /// Equivalence key of every diagnostic's first (primary) fix, the same for all rules: <c>dotnet format</c> asks Fix All
+        /// for the key of whichever Temperance diagnostic it meets first, so a per-rule key would fix nothing for the others.
+        /// </summary>
+        public const string PrimaryKey = "Temperance.Primary";
+
+        /// <summary>Equivalence key of a further edit <paramref name="index"/> of a rule (SAMP004's second fix), for tests and Fix All.</summary>
         public static string Key(string diagnosticId, string edit, int index) => $"Temperance.{edit}.{diagnosticId}.{index}";
 
         /// <summary>How a number reads in a message: invariant culture, no float noise.</summary>

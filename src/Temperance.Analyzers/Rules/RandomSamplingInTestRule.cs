@@ -27,7 +27,9 @@ namespace Temperance.Rules
             else if (kind == ValueKind.Unset)
             {
                 var providerDefault = policy.Default(request.Provider, Setting.Temperature);
-                why = providerDefault == null ? "temperature unset" : $"temperature unset, so {request.Provider}'s default {FixProperties.Show(providerDefault.Value.Value)} applies";
+                why = providerDefault == null ? "temperature unset"
+                    : request.Provider == Surfaces.Providers.Generic ? $"temperature unset, so the provider's default (usually {FixProperties.Show(providerDefault.Value.Value)}) applies"
+                    : $"temperature unset, so {request.Provider}'s default {FixProperties.Show(providerDefault.Value.Value)} applies";
             }
             else
             {

@@ -134,4 +134,58 @@ public class PackageEndToEndTests : IClassFixture<PackageFixture>
         Assert.True(build.ExitCode == 0, build.ToString());
         Assert.DoesNotMatch(@"warning SAMP005", build.Output);
     }
+
+    [Fact]
+    public void DotNetFormat_FixesTaskAndTestRules_AndTheRebuildIsClean()
+    {
+        var consumer = package.CreateConsumer("format-tests", """<PackageReference Include="xunit" Version="2.9.3" />""");
+        consumer.Write("ManifestTests.cs", """
+            using Microsoft.Extensions.AI;
+            using OpenAI.Chat;
+            using Xunit;
+
+            namespace Lighthouse;
+
+            public static class Manifests
+            {
+                // SAMP001: extraction (JSON format) at the provider default
+                public static ChatCompletionOptions ExtractCargo() => new ChatCompletionOptions { ResponseFormat = OpenAI.Chat.ChatResponseFormat.CreateJsonObjectFormat() };
+            }
+
+            public class ManifestTests
+            {
+                private IChatClient client = null!;
+
+                [Fact]
+                public async System.Threading.Tasks.Task Crew_IsStable()
+                {
+                    // SAMP002: random sampling, exact comparison
+                    var response = await client.GetResponseAsync("Crew count?", new ChatOptions { Temperature = 0.7f });
+                    Assert.Equal("12", response.Text);
+                }
+
+                [Fact]
+                public async System.Threading.Tasks.Task Captain_IsStable()
+                {
+                    // SAMP003: greedy but unseeded
+                    var response = await client.GetResponseAsync("Captain?", new ChatOptions { Temperature = 0f });
+                    Assert.Equal("Ines", response.Text);
+                }
+            }
+            """);
+
+        var before = consumer.Build();
+        Assert.True(before.ExitCode == 0, before.ToString());
+        foreach (var id in new[] { "SAMP001", "SAMP002", "SAMP003" })
+        {
+            Assert.Matches($"warning {id}", before.Output);
+        }
+
+        var format = consumer.Run("format analyzers --diagnostics SAMP001 SAMP002 SAMP003 --severity warn -v diag");
+        Assert.True(format.ExitCode == 0, format.ToString());
+
+        var after = consumer.Build();
+        Assert.True(after.ExitCode == 0, after.ToString() + "\n---\n" + consumer.Read("ManifestTests.cs"));
+        Assert.False(System.Text.RegularExpressions.Regex.IsMatch(after.Output, "warning SAMP00[123]"), after.Output + "\n---\n" + consumer.Read("ManifestTests.cs") + "\n---\n" + format.Output[^Math.Min(4000, format.Output.Length)..]);
+    }
 }

@@ -48,7 +48,7 @@ public sealed class PackageFixture : IDisposable
     }
 
     /// <summary>A consumer project in its own folder, with its own package folder and a nuget.config that works offline.</summary>
-    public Consumer CreateConsumer(string name)
+    public Consumer CreateConsumer(string name, string extraPackages = "")
     {
         var directory = Path.Combine(Root, name);
         Directory.CreateDirectory(directory);
@@ -75,6 +75,7 @@ public sealed class PackageFixture : IDisposable
                 <PackageReference Include="Temperance.Analyzers" Version="{Version}" PrivateAssets="all" />
                 <PackageReference Include="OpenAI" Version="2.15.0" />
                 <PackageReference Include="Microsoft.Extensions.AI.Abstractions" Version="10.11.0" />
+                {extraPackages}
               </ItemGroup>
             </Project>
             """);

@@ -481,7 +481,7 @@ public class SAMP001Tests
                 ChatCompletionOptions ExtractCrew() => new ChatCompletionOptions { Temperature = 0.0f };
             }
             """);
-        test.CodeActionEquivalenceKey = Key("SAMP001", AddMember, 0);
+        test.CodeActionEquivalenceKey = PrimaryKey;
         test.NumberOfFixAllIterations = 1;
         await test.RunAsync();
     }

@@ -585,7 +585,7 @@ public class SAMP002Tests
                 public async Task B() => Assert.Equal("C", (await client.GetResponseAsync("Deck?", new ChatOptions { Temperature = 0.0f, Seed = 42L })).Text);
             }
             """);
-        test.CodeActionEquivalenceKey = Key("SAMP002", "Combined", 0);
+        test.CodeActionEquivalenceKey = PrimaryKey;
         test.NumberOfFixAllIterations = 1;
         await test.RunAsync();
     }

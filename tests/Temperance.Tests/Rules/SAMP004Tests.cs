@@ -82,7 +82,7 @@ public class SAMP004Tests
                 ChatCompletionOptions A() => new ChatCompletionOptions { Temperature = 0.7f };
             }
             """);
-        test.CodeActionEquivalenceKey = Key("SAMP004", RemoveMember, 0);
+        test.CodeActionEquivalenceKey = PrimaryKey;
         await test.RunAsync();
     }
 

@@ -164,7 +164,7 @@ public class SAMP005Tests
                 ChatCompletionOptions C() => new ChatCompletionOptions { FrequencyPenalty = 2.0f };
             }
             """);
-        test.CodeActionEquivalenceKey = Temperance.Rules.FixProperties.Key("SAMP005", Temperance.Rules.FixProperties.SetValue, 0);
+        test.CodeActionEquivalenceKey = Temperance.Rules.FixProperties.PrimaryKey;
         test.NumberOfFixAllIterations = 1;
         await test.RunAsync();
     }

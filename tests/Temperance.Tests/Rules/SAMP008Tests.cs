@@ -29,7 +29,7 @@ public class SAMP008Tests
         var test = new TemperanceTest(
             Betalgo.Replace("{|#0:N = {|#1:3|}|}", "{|SAMP008:N = 3|}", StringComparison.Ordinal),
             fixedSource: Betalgo.Replace("{|#0:N = {|#1:3|}|}", "N = 1", StringComparison.Ordinal));
-        test.CodeActionEquivalenceKey = Key("SAMP008", SetValue, 0);
+        test.CodeActionEquivalenceKey = PrimaryKey;
         await test.RunAsync();
     }
 
