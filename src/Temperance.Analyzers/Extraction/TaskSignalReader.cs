@@ -32,7 +32,7 @@ namespace Temperance.Extraction
             ["translate"] = "translation", ["translator"] = "translation", ["translation"] = "translation",
             ["summarize"] = "summarization", ["summarise"] = "summarization", ["summarizer"] = "summarization", ["summariser"] = "summarization",
             ["summary"] = "summarization", ["summarization"] = "summarization",
-            ["sql"] = "code", ["codegen"] = "code", ["code"] = "code",
+            ["sql"] = "code", ["codegen"] = "code",
             ["brainstorm"] = "brainstorming", ["ideas"] = "brainstorming", ["ideation"] = "brainstorming",
             ["poem"] = "creative", ["story"] = "creative", ["slogan"] = "creative", ["tagline"] = "creative", ["lyrics"] = "creative",
         };
