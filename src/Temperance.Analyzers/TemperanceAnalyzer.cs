@@ -31,7 +31,20 @@ namespace Temperance
 
         private static void OnCompilationStart(CompilationStartAnalysisContext context)
         {
-            var catalog = SurfaceCatalog.Resolve(context.Compilation);
+            var config = CompilationConfig.Read(context.Compilation, context.Options.AnalyzerConfigOptionsProvider);
+            if (config.Problems.Count > 0)
+            {
+                // Compilation-wide configuration (unknown keys, team surfaces) has no source location: report it once, by key.
+                context.RegisterCompilationEndAction(end =>
+                {
+                    foreach (var problem in config.Problems)
+                    {
+                        end.ReportDiagnostic(Diagnostic.Create(Descriptors.InvalidConfiguration, Location.None, problem.Key, problem.Value, problem.Expected));
+                    }
+                });
+            }
+
+            var catalog = SurfaceCatalog.Resolve(context.Compilation, config.Surfaces);
             if (!catalog.HasSdkSurfaces && catalog.JsonObjectType == null && catalog.DictionaryType == null)
             {
                 return; // nothing to look for: zero cost

@@ -72,13 +72,21 @@ namespace Temperance.Rules
             "SAMP100", "Invalid Temperance configuration",
             "Temperance configuration '{0}' has the value '{1}'; expected {2}. The rule that needs it is skipped until this is fixed.",
             Configuration, DiagnosticSeverity.Warning,
-            "A Temperance option in .editorconfig or a global config could not be used. Temperance never guesses a value in its place.");
+            "A Temperance option in .editorconfig or a global config could not be used. Temperance never guesses a value in its place.",
+            WellKnownDiagnosticTags.CompilationEnd);
+
+        /// <summary>
+        /// Rules with no known false positives: the relaxed preset keeps only these as warnings while a team adopts the
+        /// package; every other rule becomes a suggestion there. (Range and extreme-value checks judge only constants
+        /// against published limits; SAMP100 judges only configuration.)
+        /// </summary>
+        public static readonly ImmutableHashSet<string> NoKnownFalsePositives = ImmutableHashSet.Create("SAMP005", "SAMP009", "SAMP100");
 
         public static readonly ImmutableArray<DiagnosticDescriptor> All = ImmutableArray.Create(
             TemperatureAboveTaskCeiling, RandomSamplingInExactTest, MissingSeed, TemperatureAndTopPBothChanged, ValueOutOfRange,
             InertSetting, SettingRejectedOrDropped, CandidatesAtTemperatureZero, ExtremeTemperature, InvalidConfiguration);
 
-        private static DiagnosticDescriptor Create(string id, string title, string message, string category, DiagnosticSeverity severity, string description) =>
-            new DiagnosticDescriptor(id, title, message, category, severity, isEnabledByDefault: true, description: description, helpLinkUri: HelpLinkBase + id + ".md");
+        private static DiagnosticDescriptor Create(string id, string title, string message, string category, DiagnosticSeverity severity, string description, params string[] tags) =>
+            new DiagnosticDescriptor(id, title, message, category, severity, isEnabledByDefault: true, description: description, helpLinkUri: HelpLinkBase + id + ".md", customTags: tags);
     }
 }

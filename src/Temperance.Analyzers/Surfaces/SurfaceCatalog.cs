@@ -35,10 +35,14 @@ namespace Temperance.Surfaces
         public INamedTypeSymbol? JsonObjectType { get; }
         public INamedTypeSymbol? DictionaryType { get; }
 
-        public static SurfaceCatalog Resolve(Compilation compilation)
+        public static SurfaceCatalog Resolve(Compilation compilation) => Resolve(compilation, System.Array.Empty<SurfaceDefinition>());
+
+        /// <summary>The built-in surfaces plus a team's own (declared in configuration), resolved to symbols.</summary>
+        public static SurfaceCatalog Resolve(Compilation compilation, IReadOnlyList<SurfaceDefinition> teamSurfaces)
         {
+            var all = Definitions.Concat(teamSurfaces).ToList();
             var byType = new Dictionary<INamedTypeSymbol, SurfaceDefinition>(SymbolEqualityComparer.Default);
-            foreach (var definition in Definitions)
+            foreach (var definition in all)
             {
                 if (compilation.GetTypeByMetadataName(definition.MetadataName) is { } type)
                 {
@@ -47,7 +51,7 @@ namespace Temperance.Surfaces
             }
 
             var sendMethods = new Dictionary<INamedTypeSymbol, (SurfaceDefinition, HashSet<string>)>(SymbolEqualityComparer.Default);
-            foreach (var definition in Definitions)
+            foreach (var definition in all)
             {
                 if (definition.SentBy != null && compilation.GetTypeByMetadataName(definition.SentBy) is { } client)
                 {

@@ -60,7 +60,14 @@ namespace Temperance.Surfaces
         public SurfaceDefinition Sends(string clientType, params string[] methods)
         {
             SentBy = clientType;
-            SendMethods.AddRange(methods);
+            foreach (var method in methods)
+            {
+                if (!SendMethods.Contains(method))
+                {
+                    SendMethods.Add(method);
+                }
+            }
+
             return this;
         }
 

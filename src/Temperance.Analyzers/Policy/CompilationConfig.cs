@@ -1,0 +1,193 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using System.Text.RegularExpressions;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Diagnostics;
+using Temperance.Model;
+using Temperance.Surfaces;
+
+namespace Temperance.Policy
+{
+    /// <summary>
+    /// Configuration that holds for the whole compilation, read once at compilation start: the team's own options types
+    /// (<c>temperance.surface.&lt;name&gt;.*</c>) and a check that every <c>temperance.*</c> key is one Temperance knows.
+    /// Read from the global options and the options of the first source file (the root .editorconfig's [*.cs] section).
+    /// </summary>
+    internal sealed class CompilationConfig
+    {
+        private const string SurfacePrefix = "temperance.surface.";
+
+        private static readonly string[] SurfaceSettingKeys = { "temperature", "top_p", "top_k", "seed", "candidates" };
+
+        private static readonly Regex KnownKey = new Regex(
+            "^temperance\\.(" + string.Join("|", new[]
+            {
+                "extreme_temperature", "task", "candidates_temperature", "test_seed", "require_seed", "test_attributes",
+                "task\\.[a-z_]+\\.(temperature|max_temperature)",
+                "provider\\.[a-z_]+\\.[a-z_]+\\.(min|max|default)",
+                "provider\\.[a-z_]+\\.unset_means_default",
+                "model\\.[a-z0-9_]+\\.(match|rejects)",
+                "adapter\\.[a-z0-9_]+\\.(drops|drops_bag_keys)",
+                "surface\\.[a-z0-9_]+\\.(type|provider|temperature|top_p|top_k|seed|candidates|model|response_format|sends)",
+            }) + ")$",
+            RegexOptions.CultureInvariant);
+
+        public List<SurfaceDefinition> Surfaces { get; } = new List<SurfaceDefinition>();
+        public List<ConfigProblem> Problems { get; } = new List<ConfigProblem>();
+
+        public static CompilationConfig Read(Compilation compilation, AnalyzerConfigOptionsProvider provider)
+        {
+            var sources = new List<AnalyzerConfigOptions> { provider.GlobalOptions };
+            var firstTree = compilation.SyntaxTrees.FirstOrDefault();
+            if (firstTree != null)
+            {
+                sources.Add(provider.GetOptions(firstTree));
+            }
+
+            var values = new Dictionary<string, string>(StringComparer.Ordinal);
+            foreach (var source in sources)
+            {
+                foreach (var key in source.Keys)
+                {
+                    if (key.StartsWith(OptionKeys.Prefix, StringComparison.Ordinal) && source.TryGetValue(key, out var value))
+                    {
+                        values[key] = value.Trim();
+                    }
+                }
+            }
+
+            var config = new CompilationConfig();
+            foreach (var pair in values.OrderBy(p => p.Key, StringComparer.Ordinal))
+            {
+                if (!KnownKey.IsMatch(pair.Key))
+                {
+                    config.Problems.Add(new ConfigProblem(pair.Key, pair.Value, "a key Temperance knows (a misspelt key is ignored until fixed; see the README's Configuration section)"));
+                }
+            }
+
+            foreach (var name in values.Keys.Where(k => k.StartsWith(SurfacePrefix, StringComparison.Ordinal) && k.EndsWith(".type", StringComparison.Ordinal))
+                .Select(k => k.Substring(SurfacePrefix.Length, k.Length - SurfacePrefix.Length - ".type".Length)))
+            {
+                config.ReadSurface(name, values, compilation);
+            }
+
+            return config;
+        }
+
+        private void ReadSurface(string name, Dictionary<string, string> values, Compilation compilation)
+        {
+            string Key(string part) => $"{SurfacePrefix}{name}.{part}";
+            var typeKey = Key("type");
+            if (compilation.GetTypeByMetadataName(values[typeKey]) is not { } type)
+            {
+                Problems.Add(new ConfigProblem(typeKey, values[typeKey], "the full metadata name of a type in this compilation or its references (e.g. Contoso.Llm.GenerationSettings)"));
+                return;
+            }
+
+            var provider = values.TryGetValue(Key("provider"), out var providerName) ? providerName : Providers.Generic;
+            if (!Providers.All.Contains(provider))
+            {
+                Problems.Add(new ConfigProblem(Key("provider"), provider, "one of " + string.Join(", ", Providers.All)));
+                return;
+            }
+
+            var surface = new SurfaceDefinition(values[typeKey], provider);
+            foreach (var settingKey in SurfaceSettingKeys)
+            {
+                if (!values.TryGetValue(Key(settingKey), out var member))
+                {
+                    continue;
+                }
+
+                if (Property(type, member) is { SetMethod: not null } property && IsNumber(property.Type))
+                {
+                    surface.Map(member, SettingNames.Parse(settingKey == "candidates" ? "candidates" : settingKey)!.Value);
+                }
+                else
+                {
+                    Problems.Add(new ConfigProblem(Key(settingKey), member, $"the name of a settable numeric property of {type.ToDisplayString()}"));
+                }
+            }
+
+            if (values.TryGetValue(Key("model"), out var model))
+            {
+                if (Property(type, model) is { Type.SpecialType: SpecialType.System_String })
+                {
+                    surface.ModelMember = model;
+                }
+                else
+                {
+                    Problems.Add(new ConfigProblem(Key("model"), model, $"the name of a string property of {type.ToDisplayString()}"));
+                }
+            }
+
+            if (values.TryGetValue(Key("response_format"), out var format))
+            {
+                if (Property(type, format) != null)
+                {
+                    surface.ResponseFormatMember = format;
+                }
+                else
+                {
+                    Problems.Add(new ConfigProblem(Key("response_format"), format, $"the name of a property of {type.ToDisplayString()}"));
+                }
+            }
+
+            if (values.TryGetValue(Key("sends"), out var sends))
+            {
+                ReadSends(surface, Key("sends"), sends, compilation);
+            }
+
+            Surfaces.Add(surface);
+        }
+
+        /// <summary><c>Contoso.Llm.Gateway.CompleteAsync, Contoso.Llm.Gateway.Complete</c>: calls without options are requests too.</summary>
+        private void ReadSends(SurfaceDefinition surface, string key, string list, Compilation compilation)
+        {
+            foreach (var entry in list.Split(new[] { ',' }, StringSplitOptions.RemoveEmptyEntries).Select(e => e.Trim()))
+            {
+                var dot = entry.LastIndexOf('.');
+                var client = dot > 0 ? compilation.GetTypeByMetadataName(entry.Substring(0, dot)) : null;
+                var method = dot > 0 ? entry.Substring(dot + 1) : string.Empty;
+                if (client == null || !client.GetMembers(method).OfType<IMethodSymbol>().Any())
+                {
+                    Problems.Add(new ConfigProblem(key, list, "comma-separated methods as Full.Type.Name.Method of types in this compilation"));
+                    return;
+                }
+
+                if (surface.SentBy != null && surface.SentBy != client.ToDisplayString())
+                {
+                    Problems.Add(new ConfigProblem(key, list, "methods of a single client type"));
+                    return;
+                }
+
+                surface.Sends(entry.Substring(0, dot), method);
+            }
+        }
+
+        private static IPropertySymbol? Property(ITypeSymbol type, string name)
+        {
+            for (var current = type; current != null; current = current.BaseType)
+            {
+                if (current.GetMembers(name).OfType<IPropertySymbol>().FirstOrDefault() is { } property)
+                {
+                    return property;
+                }
+            }
+
+            return null;
+        }
+
+        private static bool IsNumber(ITypeSymbol type)
+        {
+            if (type is INamedTypeSymbol { OriginalDefinition.SpecialType: SpecialType.System_Nullable_T } nullable)
+            {
+                type = nullable.TypeArguments[0];
+            }
+
+            return type.SpecialType is SpecialType.System_Double or SpecialType.System_Single or SpecialType.System_Decimal
+                or SpecialType.System_Int32 or SpecialType.System_Int64 or SpecialType.System_UInt32;
+        }
+    }
+}
