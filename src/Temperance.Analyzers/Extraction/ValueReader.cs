@@ -19,7 +19,7 @@ namespace Temperance.Extraction
         /// <summary>One write per possible value: a conditional gives one per branch.</summary>
         public static IEnumerable<SettingWrite> Read(Setting setting, string member, IOperation value, ITypeSymbol? targetType, Location location)
         {
-            var kind = NumericKindOf(targetType, value);
+            var kind = NumericKindOf(targetType, value, setting);
             var branches = new List<(IOperation? op, bool conditional)>();
             CollectBranches(value, false, branches);
             foreach (var (op, conditional) in branches)
@@ -216,7 +216,7 @@ namespace Temperance.Extraction
         }
 
         /// <summary>The literal type a fix must write: the member's type, or the value's own type for object-typed bags.</summary>
-        private static NumericKind NumericKindOf(ITypeSymbol? targetType, IOperation value)
+        private static NumericKind NumericKindOf(ITypeSymbol? targetType, IOperation value, Setting setting)
         {
             if (FromType(targetType) is { } fromTarget)
             {
@@ -233,7 +233,8 @@ namespace Temperance.Extraction
             {
                 NumericKind.Float => NumericKind.Float,
                 NumericKind.Decimal => NumericKind.Decimal,
-                // An integer in a JSON bag: a fix writes a double so fractional values stay valid.
+                // Counts stay integers in a JSON bag ("n": 1, not 1.0); other integers become doubles so fractions stay valid.
+                NumericKind.Int or NumericKind.Long when setting is Setting.Candidates or Setting.TopK or Setting.Seed => FromType(operand.Type)!.Value,
                 _ => NumericKind.Double,
             };
         }

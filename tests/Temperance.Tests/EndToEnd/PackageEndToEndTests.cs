@@ -188,4 +188,133 @@ public class PackageEndToEndTests : IClassFixture<PackageFixture>
         Assert.True(after.ExitCode == 0, after.ToString() + "\n---\n" + consumer.Read("ManifestTests.cs"));
         Assert.False(System.Text.RegularExpressions.Regex.IsMatch(after.Output, "warning SAMP00[123]"), after.Output + "\n---\n" + consumer.Read("ManifestTests.cs") + "\n---\n" + format.Output[^Math.Min(4000, format.Output.Length)..]);
     }
+
+    [Fact]
+    public void DotNetFormat_FixesTheRemainingRules_AndTheRebuildIsClean()
+    {
+        var consumer = package.CreateConsumer("format-rest");
+        consumer.Write("Tuning.cs", """
+            using System.Net.Http;
+            using System.Net.Http.Json;
+            using System.Threading.Tasks;
+            using Microsoft.Extensions.AI;
+            using OpenAI.Chat;
+
+            namespace Lighthouse;
+
+            public static class Tuning
+            {
+                public static ChatCompletionOptions Both() => new ChatCompletionOptions { Temperature = 0.6f, TopP = 0.8f };          // SAMP004
+                public static ChatOptions Inert() => new ChatOptions { Temperature = 0f, TopK = 20 };                                // SAMP006
+                public static ChatOptions Reasoning() => new ChatOptions { ModelId = "o3", Temperature = 0.2f };                     // SAMP007
+                public static Task<HttpResponseMessage> Same(HttpClient http) =>
+                    http.PostAsJsonAsync("v1/chat/completions", new { model = "gpt-4o-mini", temperature = 0, n = 3 });           // SAMP008
+                public static ChatOptions Noise() => new ChatOptions { Temperature = 1.8f };                                          // SAMP009
+            }
+            """);
+
+        var format = consumer.Run("format analyzers --diagnostics SAMP004 SAMP006 SAMP007 SAMP008 SAMP009 --severity info -v diag");
+        Assert.True(format.ExitCode == 0, format.ToString());
+        var text = consumer.Read("Tuning.cs");
+        Assert.Contains("new ChatCompletionOptions { Temperature = 0.6f };", text, StringComparison.Ordinal);
+        Assert.Contains("new ChatOptions { Temperature = 0f };", text, StringComparison.Ordinal);
+        Assert.Contains("new ChatOptions { ModelId = \"o3\" };", text, StringComparison.Ordinal);
+        Assert.Contains("temperature = 0, n = 1 }", text, StringComparison.Ordinal);
+        Assert.Contains("new ChatOptions { Temperature = 1.0f };", text, StringComparison.Ordinal);
+
+        var build = consumer.Build();
+        Assert.True(build.ExitCode == 0, build.ToString());
+        Assert.DoesNotMatch("warning SAMP", build.Output);
+    }
+
+    private const string Presets = """
+        using Microsoft.Extensions.AI;
+        using OpenAI.Chat;
+
+        namespace Lighthouse;
+
+        public static class Presets
+        {
+            public static ChatCompletionOptions ExtractCargo() => new ChatCompletionOptions { Temperature = 0.9f };   // SAMP001
+            public static ChatCompletionOptions Tide() => new ChatCompletionOptions { TopP = 1.4f };                  // SAMP005
+        }
+        """;
+
+    [Fact]
+    public void RelaxedPreset_KeepsOnlyTheSafeRulesAsWarnings()
+    {
+        var consumer = package.CreateConsumer("relaxed", extraProperties: "<TemperancePreset>relaxed</TemperancePreset>");
+        consumer.Write("Presets.cs", Presets);
+        var build = consumer.Build();
+        Assert.True(build.ExitCode == 0, build.ToString());
+        Assert.Matches("Presets\\.cs\\(9,\\d+\\): warning SAMP005", build.Output);
+        Assert.DoesNotMatch("SAMP001", build.Output);
+    }
+
+    [Fact]
+    public void StrictPreset_BreaksTheBuild_AndTheTeamsEditorConfigStillWins()
+    {
+        var consumer = package.CreateConsumer("strict", extraProperties: "<TemperancePreset>strict</TemperancePreset>");
+        consumer.Write("Presets.cs", Presets);
+        var build = consumer.Build();
+        Assert.NotEqual(0, build.ExitCode);
+        Assert.Matches("error SAMP001", build.Output);
+        Assert.Matches("error SAMP005", build.Output);
+
+        consumer.Write(".editorconfig", "root = true\n\n[*.cs]\ndotnet_diagnostic.SAMP001.severity = warning\ndotnet_diagnostic.SAMP005.severity = warning\n");
+        var softened = consumer.Build();
+        Assert.True(softened.ExitCode == 0, softened.ToString());
+        Assert.Matches("warning SAMP001", softened.Output);
+    }
+
+    [Fact]
+    public void UnknownPreset_IsSAMP100()
+    {
+        var consumer = package.CreateConsumer("bad-preset", extraProperties: "<TemperancePreset>lenient</TemperancePreset>");
+        consumer.Write("Presets.cs", Presets);
+        var build = consumer.Build();
+        Assert.True(build.ExitCode == 0, build.ToString());
+        Assert.Matches("warning SAMP100: Temperance configuration 'TemperancePreset' has the value 'lenient'", build.Output);
+    }
+
+    [Fact]
+    public void SarifErrorLog_CarriesTheRuleMetadata()
+    {
+        var consumer = package.CreateConsumer("sarif");
+        consumer.Write("Presets.cs", Presets);
+        var log = Path.Combine(consumer.Directory, "build.sarif");
+        var build = consumer.Run($"build --no-incremental -nodeReuse:false -p:UseSharedCompilation=false \"-p:ErrorLog={log}%2Cversion%3D2.1\"");
+        Assert.True(build.ExitCode == 0, build.ToString());
+
+        using var sarif = System.Text.Json.JsonDocument.Parse(File.ReadAllText(log));
+        var root = sarif.RootElement;
+        Assert.Equal("2.1.0", root.GetProperty("version").GetString());
+        var run = root.GetProperty("runs")[0];
+        var rules = run.GetProperty("tool").GetProperty("driver").GetProperty("rules").EnumerateArray()
+            .ToDictionary(r => r.GetProperty("id").GetString()!);
+        foreach (var id in new[] { "SAMP001", "SAMP005" })
+        {
+            var descriptor = Temperance.Rules.Descriptors.All.Single(d => d.Id == id);
+            Assert.Equal(descriptor.HelpLinkUri, rules[id].GetProperty("helpUri").GetString());
+            Assert.Equal(descriptor.Description.ToString(), rules[id].GetProperty("fullDescription").GetProperty("text").GetString());
+            Assert.Equal(descriptor.Title.ToString(), rules[id].GetProperty("shortDescription").GetProperty("text").GetString());
+        }
+
+        var results = run.GetProperty("results").EnumerateArray().Select(r => r.GetProperty("ruleId").GetString()).ToList();
+        Assert.Contains("SAMP005", results);
+    }
+
+    [Fact]
+    public void OldestServedCompilerToolset_LoadsTheAnalyzer()
+    {
+        // Microsoft.Net.Compilers.Toolset 4.14.0 is the oldest the registry serves (the analyzer itself targets Roslyn 4.8).
+        var consumer = package.CreateConsumer("old-compiler",
+            extraPackages: """<PackageReference Include="Microsoft.Net.Compilers.Toolset" Version="4.14.0" PrivateAssets="all" />""",
+            extraProperties: "<LangVersion>12</LangVersion>");
+        consumer.Write("Presets.cs", Presets);
+        var build = consumer.Build();
+        Assert.True(build.ExitCode == 0, build.ToString());
+        Assert.Matches("warning SAMP005", build.Output);
+        Assert.DoesNotMatch("CS8032|CS9057|AD0001", build.Output);
+    }
 }

@@ -48,7 +48,7 @@ public sealed class PackageFixture : IDisposable
     }
 
     /// <summary>A consumer project in its own folder, with its own package folder and a nuget.config that works offline.</summary>
-    public Consumer CreateConsumer(string name, string extraPackages = "")
+    public Consumer CreateConsumer(string name, string extraPackages = "", string extraProperties = "")
     {
         var directory = Path.Combine(Root, name);
         Directory.CreateDirectory(directory);
@@ -70,6 +70,7 @@ public sealed class PackageFixture : IDisposable
                 <ImplicitUsings>enable</ImplicitUsings>
                 <NoWarn>$(NoWarn);OPENAI001</NoWarn>
                 <UseSharedCompilation>false</UseSharedCompilation>
+                {extraProperties}
               </PropertyGroup>
               <ItemGroup>
                 <PackageReference Include="Temperance.Analyzers" Version="{Version}" PrivateAssets="all" />
