@@ -44,10 +44,10 @@ namespace Temperance
                 });
             }
 
-            var catalog = SurfaceCatalog.Resolve(context.Compilation, config.Surfaces);
-            if (!catalog.HasSdkSurfaces && catalog.JsonObjectType == null && catalog.DictionaryType == null)
+            var catalog = SurfaceCatalog.Resolve(context.Compilation, config.Surfaces, config.RawJson);
+            if (!catalog.HasSdkSurfaces && !catalog.RawJsonEnabled)
             {
-                return; // nothing to look for: zero cost
+                return; // no LLM SDK, no declared surface, raw JSON not asked for: register nothing, zero cost
             }
 
             var tests = TestFrameworks.Resolve(context.Compilation);

@@ -35,6 +35,11 @@ namespace Temperance.Extraction
 
         public void OnAnonymousObjectCreation(IAnonymousObjectCreationOperation creation)
         {
+            if (!catalog.RawJsonEnabled)
+            {
+                return;
+            }
+
             // A payload needs a "model" member; that check is a string compare on a handful of names.
             foreach (var initializer in creation.Initializers)
             {

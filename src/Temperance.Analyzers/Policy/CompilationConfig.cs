@@ -23,7 +23,7 @@ namespace Temperance.Policy
         private static readonly Regex KnownKey = new Regex(
             "^temperance\\.(" + string.Join("|", new[]
             {
-                "extreme_temperature", "task", "candidates_temperature", "test_seed", "require_seed", "test_attributes",
+                "extreme_temperature", "task", "candidates_temperature", "test_seed", "require_seed", "test_attributes", "raw_json",
                 "task\\.[a-z_]+\\.(temperature|max_temperature)",
                 "provider\\.[a-z_]+\\.[a-z_]+\\.(min|max|default)",
                 "provider\\.[a-z_]+\\.unset_means_default",
@@ -35,6 +35,7 @@ namespace Temperance.Policy
 
         public List<SurfaceDefinition> Surfaces { get; } = new List<SurfaceDefinition>();
         public List<ConfigProblem> Problems { get; } = new List<ConfigProblem>();
+        public RawJsonMode RawJson { get; private set; } = RawJsonMode.Auto;
 
         public static CompilationConfig Read(Compilation compilation, AnalyzerConfigOptionsProvider provider)
         {
@@ -63,6 +64,19 @@ namespace Temperance.Policy
                 if (!KnownKey.IsMatch(pair.Key))
                 {
                     config.Problems.Add(new ConfigProblem(pair.Key, pair.Value, "a key Temperance knows (a misspelt key is ignored until fixed; see the README's Configuration section)"));
+                }
+            }
+
+            if (values.TryGetValue(OptionKeys.RawJson, out var rawJson))
+            {
+                switch (rawJson.ToLowerInvariant())
+                {
+                    case "auto": config.RawJson = RawJsonMode.Auto; break;
+                    case "always": config.RawJson = RawJsonMode.Always; break;
+                    case "never": config.RawJson = RawJsonMode.Never; break;
+                    default:
+                        config.Problems.Add(new ConfigProblem(OptionKeys.RawJson, rawJson, "auto, always or never"));
+                        break;
                 }
             }
 

@@ -20,6 +20,7 @@ namespace Temperance.Policy
         public static string TaskCeiling(string kind) => $"temperance.task.{kind}.max_temperature";
 
         public const string TestSeed = "temperance.test_seed";
+        public const string RawJson = "temperance.raw_json";
         public const string RequireSeed = "temperance.require_seed";
         public const string TestAttributes = "temperance.test_attributes";
 

@@ -8,6 +8,14 @@ namespace Temperance.Surfaces
     /// Hand-built JSON payloads (anonymous objects, string-keyed dictionaries, JsonObject). Recognised only when they
     /// carry a "model" key and at least one sampling key, so ordinary dictionaries stay silent.
     /// </summary>
+    /// <summary><c>temperance.raw_json</c>: auto (when an LLM SDK or declared surface is referenced), always, never.</summary>
+    internal enum RawJsonMode
+    {
+        Auto,
+        Always,
+        Never,
+    }
+
     internal static class RawJsonSurface
     {
         public const string ModelKey = "model";

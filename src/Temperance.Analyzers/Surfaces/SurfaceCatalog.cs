@@ -32,13 +32,19 @@ namespace Temperance.Surfaces
         }
 
         public bool HasSdkSurfaces => byType.Count > 0;
+
+        /// <summary>Whether hand-built JSON payloads are looked for in this compilation.</summary>
+        public bool RawJsonEnabled { get; private set; }
         public INamedTypeSymbol? JsonObjectType { get; }
         public INamedTypeSymbol? DictionaryType { get; }
 
-        public static SurfaceCatalog Resolve(Compilation compilation) => Resolve(compilation, System.Array.Empty<SurfaceDefinition>());
+        public static SurfaceCatalog Resolve(Compilation compilation) => Resolve(compilation, System.Array.Empty<SurfaceDefinition>(), RawJsonMode.Auto);
 
-        /// <summary>The built-in surfaces plus a team's own (declared in configuration), resolved to symbols.</summary>
-        public static SurfaceCatalog Resolve(Compilation compilation, IReadOnlyList<SurfaceDefinition> teamSurfaces)
+        /// <summary>
+        /// The built-in surfaces plus a team's own (declared in configuration), resolved to symbols. Hand-built JSON payloads
+        /// are looked for when an LLM SDK or a declared surface is present (auto), always, or never.
+        /// </summary>
+        public static SurfaceCatalog Resolve(Compilation compilation, IReadOnlyList<SurfaceDefinition> teamSurfaces, RawJsonMode rawJson)
         {
             var all = Definitions.Concat(teamSurfaces).ToList();
             var byType = new Dictionary<INamedTypeSymbol, SurfaceDefinition>(SymbolEqualityComparer.Default);
@@ -59,11 +65,15 @@ namespace Temperance.Surfaces
                 }
             }
 
+            var rawJsonOn = rawJson == RawJsonMode.Always || (rawJson == RawJsonMode.Auto && byType.Count > 0);
             var catalog = new SurfaceCatalog(
                 byType,
                 sendMethods,
-                compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[0]),
-                compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[1]));
+                rawJsonOn ? compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[0]) : null,
+                rawJsonOn ? compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[1]) : null)
+            {
+                RawJsonEnabled = rawJsonOn,
+            };
             foreach (var adapter in AdapterSurfaces.All)
             {
                 if (compilation.GetTypeByMetadataName(adapter.DeclaringType) is { } declaring)

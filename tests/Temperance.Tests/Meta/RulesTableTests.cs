@@ -88,6 +88,10 @@ public class RulesTableTests
             {
                 Assert.Contains(entry.Value, new[] { "tests", "always", "never" });
             }
+            else if (entry.Key == "temperance.raw_json")
+            {
+                Assert.Contains(entry.Value, new[] { "auto", "always", "never" });
+            }
             else if (!entry.Key.StartsWith("temperance.model.", StringComparison.Ordinal) && !entry.Key.EndsWith(".drops", StringComparison.Ordinal))
             {
                 Assert.True(double.TryParse(entry.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out _), entry.Key);

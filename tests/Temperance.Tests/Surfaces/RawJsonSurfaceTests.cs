@@ -119,4 +119,33 @@ public class RawJsonSurfaceTests
         Assert.Equal((ValueKind.Known, 2d), request.Setting(Setting.Candidates));
         Assert.Equal(ResponseShape.JsonObject, request.ResponseShape);
     }
+
+    private const string PlainHttpClient = """
+        using System.Net.Http;
+        using System.Net.Http.Json;
+        using System.Threading.Tasks;
+
+        class Proxy
+        {
+            Task<HttpResponseMessage> Send(HttpClient http) => http.PostAsJsonAsync("v1/chat/completions", new { model = "gpt-4o-mini", top_p = 1.5 });
+        }
+        """;
+
+    [Fact]
+    public async Task ProjectWithoutAnySdk_IsSilentByDefault_ZeroCost()
+    {
+        var test = new TemperanceTest(PlainHttpClient);
+        test.TestState.AdditionalReferences.Clear();
+        test.TestState.AdditionalReferences.AddRange(TestReferences.Framework);
+        await test.RunAsync();
+    }
+
+    [Fact]
+    public async Task ProjectWithoutAnySdk_RawJsonAlways_Triggers()
+    {
+        var test = new TemperanceTest(PlainHttpClient.Replace("top_p = 1.5", "{|SAMP005:top_p = 1.5|}", StringComparison.Ordinal), "temperance.raw_json = always\n");
+        test.TestState.AdditionalReferences.Clear();
+        test.TestState.AdditionalReferences.AddRange(TestReferences.Framework);
+        await test.RunAsync();
+    }
 }
