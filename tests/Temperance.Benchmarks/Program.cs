@@ -1,0 +1,125 @@
+using System.Collections.Immutable;
+using System.Diagnostics;
+using System.Reflection;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.CodeActions;
+using Microsoft.CodeAnalysis.CodeFixes;
+using Microsoft.CodeAnalysis.CSharp;
+using Microsoft.CodeAnalysis.Diagnostics;
+using Microsoft.CodeAnalysis.Text;
+using Temperance;
+using Temperance.Benchmarks;
+using Temperance.CodeFixes;
+
+// Usage: dotnet run -c Release --project tests/Temperance.Benchmarks [-- --lines 100000]
+var lines = args.SkipWhile(a => a != "--lines").Skip(1).Select(int.Parse).DefaultIfEmpty(100_000).First();
+Console.WriteLine($"Temperance benchmark: {lines:N0} lines, {Environment.ProcessorCount} cores, {RuntimeInformationText()}");
+
+var framework = Basic.Reference.Assemblies.Net100.References.All.Cast<MetadataReference>().ToList();
+var sdks = new[] { "OpenAI", "System.ClientModel", "System.Memory.Data", "Microsoft.Extensions.AI.Abstractions", "OllamaSharp" }
+    .Select(n => MetadataReference.CreateFromFile(Path.Combine(AppContext.BaseDirectory, n + ".dll"))).Cast<MetadataReference>().ToList();
+var netAnalyzers = LoadNetAnalyzers();
+var table = new Temperance.Testing.RulesTableOptions(Temperance.Testing.RulesTableOptions.FindTable());
+Console.WriteLine($"NetAnalyzers 11.0.100: {netAnalyzers.Length} analyzers, every rule enabled");
+
+var dense = await Measure("dense", SyntheticProject.Generate(lines, dense: true), framework.Concat(sdks).ToList(), netAnalyzers, table);
+var none = await Measure("none", SyntheticProject.Generate(lines, dense: false), framework, netAnalyzers, table);
+
+Console.WriteLine();
+Console.WriteLine($"{"project",-7} {"compile ms",10} {"Temperance ms",14} {"% of compile",13} {"NetAnalyzers median ms",23} {"Temperance / median",20} {"diagnostics",12}");
+foreach (var r in new[] { dense, none })
+{
+    Console.WriteLine($"{r.Name,-7} {r.CompileMs,10:N0} {r.TemperanceMs,14:N1} {r.TemperanceMs / r.CompileMs * 100,12:N2}% {r.MedianMs,23:N1} {r.TemperanceMs / Math.Max(r.MedianMs, 0.001),20:N2} {r.Diagnostics,12:N0}");
+}
+
+Console.WriteLine();
+Console.WriteLine($"target: Temperance <= 2% of compile time (dense): {(dense.TemperanceMs / dense.CompileMs <= 0.02 ? "met" : "NOT met")}");
+Console.WriteLine($"target: Temperance <= median NetAnalyzers analyzer (dense): {(dense.TemperanceMs <= dense.MedianMs ? "met" : "NOT met")}");
+Console.WriteLine($"target: no actions without an LLM SDK (none): {(none.TemperanceActions == 0 ? "met" : $"NOT met ({none.TemperanceActions} actions)")}");
+Console.WriteLine($"peak working set: {Process.GetCurrentProcess().PeakWorkingSet64 / (1024 * 1024):N0} MiB");
+await TimeCodeFix(framework.Concat(sdks).ToList(), table);
+return 0;
+
+static async Task<Result> Measure(string name, List<string> sources, List<MetadataReference> references, ImmutableArray<DiagnosticAnalyzer> netAnalyzers, AnalyzerConfigOptionsProvider table)
+{
+    var trees = sources.Select((s, i) => CSharpSyntaxTree.ParseText(s, new CSharpParseOptions(LanguageVersion.Latest), path: $"/bench/{name}/File{i}.cs")).ToList();
+    var options = new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, nullableContextOptions: NullableContextOptions.Enable)
+        .WithSpecificDiagnosticOptions(netAnalyzers.SelectMany(a => a.SupportedDiagnostics).Select(d => d.Id).Distinct()
+            .Select(id => new KeyValuePair<string, ReportDiagnostic>(id, ReportDiagnostic.Warn)));
+    CSharpCompilation Fresh() => CSharpCompilation.Create("Bench" + name, trees, references, options);
+
+    // Compile time without analyzers: bind every declaration and method body (warm once, then measure the median of 3).
+    _ = Fresh().GetDiagnostics();
+    var compileTimes = new List<double>();
+    for (var i = 0; i < 3; i++)
+    {
+        var watch = Stopwatch.StartNew();
+        _ = Fresh().GetDiagnostics();
+        compileTimes.Add(watch.Elapsed.TotalMilliseconds);
+    }
+
+    var temperance = new TemperanceAnalyzer();
+    var all = netAnalyzers.Add(temperance);
+    var withAnalyzers = Fresh().WithAnalyzers(all, new CompilationWithAnalyzersOptions(
+        new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty, table), onAnalyzerException: null, concurrentAnalysis: true, logAnalyzerExecutionTime: true));
+    var diagnostics = await withAnalyzers.GetAnalyzerDiagnosticsAsync();
+    var times = new List<double>();
+    foreach (var analyzer in netAnalyzers)
+    {
+        times.Add((await withAnalyzers.GetAnalyzerTelemetryInfoAsync(analyzer, CancellationToken.None)).ExecutionTime.TotalMilliseconds);
+    }
+
+    var info = await withAnalyzers.GetAnalyzerTelemetryInfoAsync(temperance, CancellationToken.None);
+    var actions = info.OperationBlockStartActionsCount + info.OperationBlockActionsCount + info.OperationActionsCount + info.SyntaxNodeActionsCount
+        + info.SymbolActionsCount + info.CompilationEndActionsCount + info.SemanticModelActionsCount + info.SyntaxTreeActionsCount;
+    times.Sort();
+    var ours = diagnostics.Count(d => d.Id.StartsWith("SAMP", StringComparison.Ordinal));
+    Console.WriteLine($"{name}: {trees.Count} files, {sources.Sum(s => s.Split('\n').Length):N0} lines, {ours:N0} Temperance diagnostics, {diagnostics.Length:N0} in all");
+    return new Result(name, compileTimes.OrderBy(t => t).ElementAt(1), info.ExecutionTime.TotalMilliseconds, times[times.Count / 2], ours, actions);
+}
+
+static ImmutableArray<DiagnosticAnalyzer> LoadNetAnalyzers()
+{
+    var packages = Environment.GetEnvironmentVariable("NUGET_PACKAGES") is { Length: > 0 } custom
+        ? custom : Path.Combine(Environment.GetFolderPath(Environment.SpecialFolder.UserProfile), ".nuget", "packages");
+    var folder = Path.Combine(packages, "microsoft.codeanalysis.netanalyzers", "11.0.100", "analyzers", "dotnet", "cs");
+    var loader = new Loader();
+    return Directory.GetFiles(folder, "*.dll")
+        .SelectMany(path => new AnalyzerFileReference(path, loader).GetAnalyzers(LanguageNames.CSharp))
+        .ToImmutableArray();
+}
+
+static async Task TimeCodeFix(List<MetadataReference> references, AnalyzerConfigOptionsProvider table)
+{
+    // A 5,000-line file with requests throughout: time one SAMP005 fix, computed and applied.
+    var source = string.Join("\n", SyntheticProject.Generate(5_000, dense: true));
+    source = string.Join("\n", source.Split('\n').Where(l => !l.StartsWith("using ", StringComparison.Ordinal) && !l.StartsWith("namespace ", StringComparison.Ordinal)));
+    source = "using System; using System.Collections.Generic; using System.Linq; using OpenAI.Chat; using Microsoft.Extensions.AI; using OllamaSharp.Models;\nnamespace Ferry;\n" + source;
+    using var workspace = new AdhocWorkspace();
+    var project = workspace.AddProject("Fix", LanguageNames.CSharp).WithMetadataReferences(references)
+        .WithCompilationOptions(new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary));
+    var document = project.AddDocument("Large.cs", SourceText.From(source));
+    var compilation = await document.Project.GetCompilationAsync();
+    var diagnostics = await compilation!.WithAnalyzers(ImmutableArray.Create<DiagnosticAnalyzer>(new TemperanceAnalyzer()),
+        new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty, table)).GetAnalyzerDiagnosticsAsync();
+    var target = diagnostics.First(d => d.Id == "SAMP005");
+    var provider = new TemperanceCodeFixProvider();
+    var watch = Stopwatch.StartNew();
+    var actions = new List<CodeAction>();
+    await provider.RegisterCodeFixesAsync(new CodeFixContext(document, target, (a, _) => actions.Add(a), CancellationToken.None));
+    var operations = await actions[0].GetOperationsAsync(CancellationToken.None);
+    var changed = operations.OfType<ApplyChangesOperation>().Single().ChangedSolution.GetDocument(document.Id)!;
+    _ = await changed.GetTextAsync();
+    Console.WriteLine($"code fix on a {source.Split('\n').Length:N0}-line file: {watch.Elapsed.TotalMilliseconds:N0} ms ({actions[0].Title})");
+}
+
+static string RuntimeInformationText() => System.Runtime.InteropServices.RuntimeInformation.FrameworkDescription;
+
+internal sealed record Result(string Name, double CompileMs, double TemperanceMs, double MedianMs, int Diagnostics, int TemperanceActions);
+
+internal sealed class Loader : IAnalyzerAssemblyLoader
+{
+    public void AddDependencyLocation(string fullPath) { }
+
+    public Assembly LoadFromPath(string fullPath) => Assembly.LoadFrom(fullPath);
+}
