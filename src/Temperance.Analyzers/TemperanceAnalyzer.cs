@@ -54,38 +54,54 @@ namespace Temperance
             var policies = new ConcurrentDictionary<SyntaxTree, TreeState>();
             var options = context.Options.AnalyzerConfigOptionsProvider;
 
+            // Per block: one operation action over the few kinds that create, change or send options, behind a filter
+            // that is a handful of symbol comparisons. Only a block where something matched is turned into requests, at
+            // its end, so every diagnostic stays local to the block (the IDE can re-run one member at a time).
             context.RegisterOperationBlockStartAction(block =>
             {
-                var collector = new BlockCollector(catalog);
-                block.RegisterOperationAction(c => collector.OnObjectCreation((IObjectCreationOperation)c.Operation), OperationKind.ObjectCreation);
-                block.RegisterOperationAction(c => collector.OnAnonymousObjectCreation((IAnonymousObjectCreationOperation)c.Operation), OperationKind.AnonymousObjectCreation);
-                block.RegisterOperationAction(c => collector.OnWith((IWithOperation)c.Operation), OperationKind.With);
-                block.RegisterOperationAction(c => collector.OnAssignment((ISimpleAssignmentOperation)c.Operation), OperationKind.SimpleAssignment);
-                block.RegisterOperationAction(c => collector.OnInvocation((IInvocationOperation)c.Operation), OperationKind.Invocation);
+                BlockCollector? collector = null;
+                block.RegisterOperationAction(
+                    c =>
+                    {
+                        if (BlockCollector.IsCandidate(catalog, c.Operation))
+                        {
+                            lock (block)
+                            {
+                                collector ??= new BlockCollector(catalog);
+                                collector.OfferCandidate(c.Operation);
+                            }
+                        }
+                    },
+                    OperationKind.ObjectCreation, OperationKind.AnonymousObjectCreation, OperationKind.With, OperationKind.SimpleAssignment, OperationKind.Invocation);
                 block.RegisterOperationBlockEndAction(end =>
                 {
-                    if (collector.IsEmpty)
+                    if (collector == null || end.OperationBlocks.Length == 0)
                     {
                         return;
                     }
 
-                    var tree = end.OperationBlocks.Length > 0 ? end.OperationBlocks[0].Syntax.SyntaxTree : null;
-                    if (tree == null)
-                    {
-                        return;
-                    }
-
+                    var tree = end.OperationBlocks[0].Syntax.SyntaxTree;
                     var state = policies.GetOrAdd(tree, t => new TreeState(new TemperancePolicy(options.GetOptions(t), options.GlobalOptions)));
-                    var owner = end.OwningSymbol;
+                    var owner = OwnerOf(end.OwningSymbol);
                     var callContext = new CallContext(owner, owner.ContainingType, tests.IsTestContext(owner, state.Policy.TestAttributes));
                     var requests = RequestBuilder.Build(catalog, callContext, collector, end.OperationBlocks);
-                    if (requests.Count == 0)
+                    if (requests.Count > 0)
                     {
-                        return;
+                        Judge(requests, state, end.ReportDiagnostic);
                     }
-                    Judge(requests, state, end.ReportDiagnostic);
                 });
             });
+        }
+
+        /// <summary>The member a block belongs to: lambdas and local functions count as their containing member.</summary>
+        private static ISymbol OwnerOf(ISymbol symbol)
+        {
+            while (symbol is IMethodSymbol { MethodKind: MethodKind.AnonymousFunction or MethodKind.LocalFunction } && symbol.ContainingSymbol != null)
+            {
+                symbol = symbol.ContainingSymbol;
+            }
+
+            return symbol;
         }
 
         private static void Judge(IReadOnlyList<Request> requests, TreeState state, System.Action<Diagnostic> report)

@@ -6,13 +6,12 @@ using Temperance.Surfaces;
 namespace Temperance.Extraction
 {
     /// <summary>
-    /// Gathers, during one operation block, the few operations that can create, change or send options. The filter
-    /// is a symbol comparison; all other work waits until the block ends and something matched.
+    /// Gathers the few operations of one block that can create, change or send options. The filter is a symbol
+    /// comparison (<see cref="IsCandidate"/>); all other work waits until a block has matched.
     /// </summary>
     internal sealed class BlockCollector
     {
         private readonly SurfaceCatalog catalog;
-        private readonly object gate = new object();
 
         public BlockCollector(SurfaceCatalog catalog)
         {
@@ -25,97 +24,102 @@ namespace Temperance.Extraction
 
         public bool IsEmpty => Creations.Count == 0 && Mutations.Count == 0 && Invocations.Count == 0;
 
-        public void OnObjectCreation(IObjectCreationOperation creation)
+        /// <summary>Keeps an operation if it could belong to a request.</summary>
+        public void Offer(IOperation operation)
         {
-            if (catalog.Find(creation.Type) != null || (creation.Initializer != null && catalog.IsPayloadType(creation.Type)))
-            {
-                Add(Creations, creation);
-            }
-        }
-
-        public void OnAnonymousObjectCreation(IAnonymousObjectCreationOperation creation)
-        {
-            if (!catalog.RawJsonEnabled)
+            if (!IsCandidate(catalog, operation))
             {
                 return;
             }
 
-            // A payload needs a "model" member; that check is a string compare on a handful of names.
+            OfferCandidate(operation);
+        }
+
+        /// <summary>Keeps an operation that already passed <see cref="IsCandidate"/>.</summary>
+        public void OfferCandidate(IOperation operation)
+        {
+            switch (operation)
+            {
+                case ISimpleAssignmentOperation assignment: Mutations.Add(assignment); break;
+                case IInvocationOperation invocation: Invocations.Add(invocation); break;
+                default: Creations.Add(operation); break;
+            }
+        }
+
+        /// <summary>
+        /// Whether an operation could belong to a request. The analyzer runs this on every operation of the kinds it
+        /// registers, so it allocates nothing and stays a handful of symbol comparisons.
+        /// </summary>
+        public static bool IsCandidate(SurfaceCatalog catalog, IOperation operation) => operation switch
+        {
+            IObjectCreationOperation creation => catalog.Find(creation.Type) != null || (creation.Initializer != null && catalog.IsPayloadType(creation.Type)),
+            IAnonymousObjectCreationOperation anonymous => catalog.RawJsonEnabled && HasModelMember(anonymous),
+            IWithOperation with => catalog.Find(with.Type) != null,
+            ISimpleAssignmentOperation assignment => IsMutation(catalog, assignment),
+            IInvocationOperation invocation => IsRelevantCall(catalog, invocation),
+            _ => false,
+        };
+
+        /// <summary>A payload needs a "model" member; that check is a string compare on a handful of names.</summary>
+        private static bool HasModelMember(IAnonymousObjectCreationOperation creation)
+        {
             foreach (var initializer in creation.Initializers)
             {
                 if (initializer is ISimpleAssignmentOperation { Target: IPropertyReferenceOperation { Property.Name: RawJsonSurface.ModelKey } })
                 {
-                    Add(Creations, creation);
-                    return;
+                    return true;
                 }
             }
+
+            return false;
         }
 
-        public void OnWith(IWithOperation with)
-        {
-            if (catalog.Find(with.Type) != null)
-            {
-                Add(Creations, with);
-            }
-        }
-
-        public void OnAssignment(ISimpleAssignmentOperation assignment)
+        private static bool IsMutation(SurfaceCatalog catalog, ISimpleAssignmentOperation assignment)
         {
             if (assignment.Target is not IPropertyReferenceOperation property)
             {
-                return;
+                return false;
             }
 
-            // Object-initializer members are read from their creation; only mutations of an existing instance land here.
+            // Object-initializer members are read from their creation; only mutations of an existing instance count here.
             if (property.Instance is IInstanceReferenceOperation { ReferenceKind: InstanceReferenceKind.ImplicitReceiver })
             {
-                return;
+                return false;
             }
 
             if (catalog.Find(property.Property.ContainingType) != null)
             {
-                Add(Mutations, assignment);
-                return;
+                return true;
             }
 
             // settings.ExtensionData["temperature"] = … or payload["temperature"] = …
-            if (property.Property.IsIndexer && property.Instance != null
+            return property.Property.IsIndexer && property.Instance != null
                 && (catalog.IsPayloadType(property.Instance.Type)
-                    || property.Instance is IPropertyReferenceOperation bag && catalog.Find(bag.Property.ContainingType) != null))
-            {
-                Add(Mutations, assignment);
-            }
+                    || property.Instance is IPropertyReferenceOperation bag && catalog.Find(bag.Property.ContainingType) != null);
         }
 
-        public void OnInvocation(IInvocationOperation invocation)
+        private static bool IsRelevantCall(SurfaceCatalog catalog, IInvocationOperation invocation)
         {
             var method = invocation.TargetMethod;
             if (invocation.Instance != null && catalog.Find(invocation.Instance.Type) != null)
             {
-                // SetSearchOption, SetGuidance, Clone …
-                Add(Invocations, invocation);
-                return;
+                return true; // SetSearchOption, SetGuidance, Clone …
             }
 
             if (IsSerialisation(method) || (method.Name == "Add" && invocation.Instance != null && catalog.IsPayloadType(invocation.Instance.Type)))
             {
-                Add(Invocations, invocation);
-                return;
+                return true;
             }
 
             foreach (var argument in invocation.Arguments)
             {
                 if (argument.Parameter != null && catalog.Find(argument.Parameter.Type) != null)
                 {
-                    Add(Invocations, invocation);
-                    return;
+                    return true;
                 }
             }
 
-            if (catalog.SurfaceSentBy(method) != null)
-            {
-                Add(Invocations, invocation);
-            }
+            return catalog.SurfaceSentBy(method) != null;
         }
 
         /// <summary>Methods that send or serialise a hand-built JSON payload.</summary>
@@ -131,15 +135,6 @@ namespace Temperance.Extraction
             return ns.StartsWith("System.Net.Http.Json", System.StringComparison.Ordinal)
                 || ns.StartsWith("System.Text.Json", System.StringComparison.Ordinal)
                 || ns.StartsWith("Newtonsoft.Json", System.StringComparison.Ordinal);
-        }
-
-        private void Add<T>(List<T> list, T item)
-        {
-            // Operation actions of one block may run concurrently.
-            lock (gate)
-            {
-                list.Add(item);
-            }
         }
     }
 }

@@ -51,14 +51,7 @@ public static class Extract
             var collector = new BlockCollector(catalog);
             foreach (var op in operation.DescendantsAndSelf())
             {
-                switch (op)
-                {
-                    case IObjectCreationOperation c: collector.OnObjectCreation(c); break;
-                    case IAnonymousObjectCreationOperation a: collector.OnAnonymousObjectCreation(a); break;
-                    case IWithOperation w: collector.OnWith(w); break;
-                    case ISimpleAssignmentOperation s: collector.OnAssignment(s); break;
-                    case IInvocationOperation i: collector.OnInvocation(i); break;
-                }
+                collector.Offer(op);
             }
 
             if (!collector.IsEmpty)
