@@ -43,7 +43,7 @@ namespace Temperance.CodeFixes
                 }
 
                 var edits = new List<Edit>();
-                for (var index = 0; index < count && index < diagnostic.AdditionalLocations.Count; index++)
+                for (var index = 0; index < count; index++)
                 {
                     if (Edit.TryRead(diagnostic, index, out var edit) && (edit.Kind != FixProperties.RemoveMember || context.Document.TryGetSyntaxRoot(out var root) is false
                         || Removable(root!.FindNode(edit.Span, getInnermostNodeForTie: true)) != null))
@@ -478,10 +478,19 @@ namespace Temperance.CodeFixes
                     return false;
                 }
 
+                if (!properties.TryGetValue(FixProperties.Span(index), out var spanText) || spanText?.Split(':') is not { Length: 2 } spanParts
+                    || !int.TryParse(spanParts[0], NumberStyles.Integer, CultureInfo.InvariantCulture, out var start)
+                    || !int.TryParse(spanParts[1], NumberStyles.Integer, CultureInfo.InvariantCulture, out var length))
+                {
+                    return false;
+                }
+
+                var span = new Microsoft.CodeAnalysis.Text.TextSpan(start, length);
+
                 edit = new Edit
                 {
                     Kind = kind,
-                    Span = diagnostic.AdditionalLocations[index].SourceSpan,
+                    Span = span,
                     Literal = literal,
                     Member = member ?? string.Empty,
                     Wrapper = wrapper,

@@ -88,7 +88,7 @@ static async Task<Result> Measure(string name, List<string> sources, List<Metada
     }
 
     var diagnostics = last.Diagnostics;
-    var withAnalyzers = last.Run;
+    var withAnalyzers = last.Run!;
     var times = new List<double>();
     foreach (var analyzer in netAnalyzers)
     {

@@ -540,8 +540,11 @@ namespace Temperance.Extraction
             return null;
         }
 
-        /// <summary>The member of a surface type that carries a setting, with its literal type and experimental id.</summary>
-        private static (string Name, NumericKind Kind, string? Experimental)? MemberFor(ITypeSymbol type, SurfaceDefinition surface, Setting setting)
+        /// <summary>The member of a surface type that carries a setting, with its literal type and experimental id (cached per compilation).</summary>
+        private (string Name, NumericKind Kind, string? Experimental)? MemberFor(ITypeSymbol type, SurfaceDefinition surface, Setting setting) =>
+            catalog.MemberCache.GetOrAdd((type, setting), key => FindMember(key.Type, surface, key.Setting));
+
+        private static (string Name, NumericKind Kind, string? Experimental)? FindMember(ITypeSymbol type, SurfaceDefinition surface, Setting setting)
         {
             foreach (var pair in surface.Members)
             {

@@ -31,6 +31,12 @@ namespace Temperance.Rules
         public static string Wrapper(int index) => $"Temperance.Wrapper.{index}";
         public static string TypeName(int index) => $"Temperance.Type.{index}";
         public static string Parameter(int index) => $"Temperance.Parameter.{index}";
+        /// <summary>
+        /// Where edit <c>i</c> applies, as "start:length" in the diagnostic's own file. Carried as a property rather than
+        /// an additional location: the compiler checks every location of every diagnostic for generated code, which was
+        /// most of Temperance's cost on a dense project.
+        /// </summary>
+        public static string Span(int index) => $"Temperance.Span.{index}";
         /// <summary>More assignments for the same edit, "Member|Kind|Value" joined by ';' (temperature and seed together).</summary>
         public static string Extra(int index) => $"Temperance.Extra.{index}";
         /// <summary>Experimental-API diagnostic the edited code raises (OPENAI001): the fix wraps the statement in a pragma.</summary>
@@ -126,7 +132,7 @@ namespace Temperance.Rules
 
         public int Count => locations.Count;
 
-        public ImmutableArray<Location> Locations => locations.ToImmutableArray();
+        public ImmutableArray<Location> Locations => ImmutableArray<Location>.Empty;
 
         public ImmutableDictionary<string, string?> Properties
         {
@@ -141,6 +147,7 @@ namespace Temperance.Rules
         {
             var index = locations.Count;
             locations.Add(location);
+            properties[FixProperties.Span(index)] = $"{location.SourceSpan.Start.ToString(CultureInfo.InvariantCulture)}:{location.SourceSpan.Length.ToString(CultureInfo.InvariantCulture)}";
             properties[FixProperties.Edit(index)] = edit;
             properties[FixProperties.Value(index)] = value.ToString("R", CultureInfo.InvariantCulture);
             properties[FixProperties.NumericKind(index)] = kind.ToString();

@@ -33,6 +33,19 @@ namespace Temperance.Surfaces
 
         public bool HasSdkSurfaces => byType.Count > 0;
 
+        /// <summary>Per compilation: which member of a surface type carries a setting (attribute decoding is not free).</summary>
+        public System.Collections.Concurrent.ConcurrentDictionary<(ITypeSymbol Type, Model.Setting Setting), (string Name, Model.NumericKind Kind, string? Experimental)?> MemberCache { get; } =
+            new System.Collections.Concurrent.ConcurrentDictionary<(ITypeSymbol, Model.Setting), (string, Model.NumericKind, string?)?>(new TypeSettingComparer());
+
+        private sealed class TypeSettingComparer : IEqualityComparer<(ITypeSymbol Type, Model.Setting Setting)>
+        {
+            public bool Equals((ITypeSymbol Type, Model.Setting Setting) x, (ITypeSymbol Type, Model.Setting Setting) y) =>
+                x.Setting == y.Setting && SymbolEqualityComparer.Default.Equals(x.Type, y.Type);
+
+            public int GetHashCode((ITypeSymbol Type, Model.Setting Setting) obj) =>
+                (SymbolEqualityComparer.Default.GetHashCode(obj.Type) * 397) ^ (int)obj.Setting;
+        }
+
         /// <summary>Whether hand-built JSON payloads are looked for in this compilation.</summary>
         public bool RawJsonEnabled { get; private set; }
         public INamedTypeSymbol? JsonObjectType { get; }

@@ -108,7 +108,7 @@ public class DescriptorTests
             }
             """);
         test.CompilerDiagnostics = Microsoft.CodeAnalysis.Testing.CompilerDiagnostics.None;
-        test.ExpectedDiagnostics.Add(Verify.Diagnostic("SAMP005").WithSpan(5, 78, 5, 87).WithSpan(5, 85, 5, 87));
+        test.ExpectedDiagnostics.Add(Verify.Diagnostic("SAMP005").WithSpan(5, 78, 5, 87));
         await test.RunAsync();
     }
 

@@ -19,12 +19,12 @@ public class SAMP001Tests
             {
                 ChatCompletionOptions Options() => new ChatCompletionOptions
                 {
-                    {|#0:Temperature = {|#1:0.9f|}|},
+                    {|#0:Temperature = 0.9f|},
                     ResponseFormat = ChatResponseFormat.CreateJsonSchemaFormat("cargo", BinaryData.FromString("{}")),
                 };
             }
             """,
-            Verify.Diagnostic("SAMP001").WithLocation(0).WithLocation(1).WithMessage(
+            Verify.Diagnostic("SAMP001").WithLocation(0).WithMessage(
                 "Temperature 0.9 is above the ceiling 0.3 for task 'extraction' (task from the JSON-schema response format (ChatResponseFormat.CreateJsonSchemaFormat(\"cargo\", BinaryDat…); ceiling from temperance.task.extraction.max_temperature)"));
     }
 
@@ -39,7 +39,7 @@ public class SAMP001Tests
             {
                 Task<ChatResponse> Handle(IChatClient client, string note)
                 {
-                    var options = new ChatOptions { {|#0:Temperature = {|#1:0.8f|}|} };
+                    var options = new ChatOptions { {|#0:Temperature = 0.8f|} };
                     return client.GetResponseAsync(new[]
                     {
                         new ChatMessage(ChatRole.System, "Label the return reason as one of: damaged, late, wrong-size, other."),
@@ -48,7 +48,7 @@ public class SAMP001Tests
                 }
             }
             """,
-            Verify.Diagnostic("SAMP001").WithLocation(0).WithLocation(1).WithMessage(
+            Verify.Diagnostic("SAMP001").WithLocation(0).WithMessage(
                 "Temperature 0.8 is above the ceiling 0.3 for task 'classification' (task from the prompt text 'Label the return reason as one of: damaged, late…'; ceiling from temperance.task.classification.max_temperature)"));
     }
 

@@ -26,7 +26,7 @@ public class SAMP003Tests
                 }
             }
             """,
-            Verify.Diagnostic("SAMP003").WithLocation(0).WithLocation(0).WithMessage(
+            Verify.Diagnostic("SAMP003").WithLocation(0).WithMessage(
                 "This run must be reproducible (the test 'Deck' compares its exact output with Assert.Equal) but ChatOptions has no seed; set one"));
     }
 

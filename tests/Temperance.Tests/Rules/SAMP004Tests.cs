@@ -14,10 +14,10 @@ public class SAMP004Tests
 
             class Fares
             {
-                ChatCompletionOptions A() => new ChatCompletionOptions { {|#2:Temperature = 0.7f|}, {|#0:TopP = 0.8f|} };
+                ChatCompletionOptions A() => new ChatCompletionOptions { Temperature = 0.7f, {|#0:TopP = 0.8f|} };
             }
             """,
-            Verify.Diagnostic("SAMP004").WithLocation(0).WithLocation(0).WithLocation(2).WithMessage(
+            Verify.Diagnostic("SAMP004").WithLocation(0).WithMessage(
                 "Both temperature (0.7) and top-p (0.8) differ from openai's defaults (temperature 1, top-p 1); change one of them, not both"));
     }
 
@@ -61,7 +61,7 @@ public class SAMP004Tests
                 ChatCompletionOptions Greedy() => new ChatCompletionOptions { Temperature = 0f, TopP = 0.5f }; // SAMP006's case, Info
             }
             """,
-            Verify.Diagnostic("SAMP006").WithSpan(10, 85, 10, 96).WithSpan(10, 85, 10, 96));
+            Verify.Diagnostic("SAMP006").WithSpan(10, 85, 10, 96));
     }
 
     [Fact]

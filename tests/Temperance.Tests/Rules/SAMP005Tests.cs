@@ -13,10 +13,10 @@ public class SAMP005Tests
 
             class Quotes
             {
-                ChatCompletionsOptions A() => new ChatCompletionsOptions { {|#0:Temperature = {|#1:1.3f|}|} };
+                ChatCompletionsOptions A() => new ChatCompletionsOptions { {|#0:Temperature = 1.3f|} };
             }
             """,
-            Verify.Diagnostic("SAMP005").WithLocation(0).WithLocation(1).WithMessage(
+            Verify.Diagnostic("SAMP005").WithLocation(0).WithMessage(
                 "Temperature = 1.3 is outside the range [0, 1] that azure_inference accepts for temperature (rules table: temperance.provider.azure_inference.temperature.max)"));
     }
 

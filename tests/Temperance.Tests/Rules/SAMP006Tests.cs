@@ -16,7 +16,7 @@ public class SAMP006Tests
                 ChatOptions A() => new ChatOptions { Temperature = 0f, {|#0:TopP = 0.9f|}, {|SAMP006:TopK = 20|} };
             }
             """,
-            Verify.Diagnostic("SAMP006").WithLocation(0).WithLocation(0).WithMessage(
+            Verify.Diagnostic("SAMP006").WithLocation(0).WithMessage(
                 "TopP = 0.9 has no effect because temperature is 0: decoding is greedy and always takes the most likely token"));
     }
 

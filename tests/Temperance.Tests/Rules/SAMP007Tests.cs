@@ -23,7 +23,7 @@ public class SAMP007Tests
                 }
             }
             """,
-            Verify.Diagnostic("SAMP007").WithLocation(0).WithLocation(0).WithMessage(
+            Verify.Diagnostic("SAMP007").WithLocation(0).WithMessage(
                 "Temperature is rejected by model 'o3-mini' (family 'openai_reasoning', temperance.model.openai_reasoning.match)"));
     }
 
@@ -82,7 +82,7 @@ public class SAMP007Tests
                 }
             }
             """,
-            Verify.Diagnostic("SAMP007").WithLocation(0).WithLocation(0).WithMessage(
+            Verify.Diagnostic("SAMP007").WithLocation(0).WithMessage(
                 "TopK is silently dropped by the OpenAI chat adapter (AsIChatClient) (temperance.adapter.openai_chat.drops)"));
     }
 

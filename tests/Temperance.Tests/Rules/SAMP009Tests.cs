@@ -13,10 +13,10 @@ public class SAMP009Tests
 
             class Slogans
             {
-                ChatCompletionOptions A() => new ChatCompletionOptions { {|#0:Temperature = {|#1:1.7f|}|} };
+                ChatCompletionOptions A() => new ChatCompletionOptions { {|#0:Temperature = 1.7f|} };
             }
             """,
-            Verify.Diagnostic("SAMP009").WithLocation(0).WithLocation(1).WithMessage(
+            Verify.Diagnostic("SAMP009").WithLocation(0).WithMessage(
                 "Temperature 1.7 is above 1.5 (temperance.extreme_temperature): sampling this flat drifts toward random tokens"));
     }
 

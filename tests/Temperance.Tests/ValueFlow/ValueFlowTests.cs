@@ -134,10 +134,10 @@ public class ValueFlowTests
             {
                 private const float Wild = 2.5f;
 
-                ChatCompletionOptions A() => new ChatCompletionOptions { {|#0:Temperature = {|#1:Wild|}|} };
+                ChatCompletionOptions A() => new ChatCompletionOptions { {|#0:Temperature = Wild|} };
             }
             """,
-            Verify.Diagnostic("SAMP005").WithLocation(0).WithLocation(1).WithMessage(
+            Verify.Diagnostic("SAMP005").WithLocation(0).WithMessage(
                 "Temperature = 2.5 (from constant 'Wild') is outside the range [0, 2] that openai accepts for temperature (rules table: temperance.provider.openai.temperature.max)"));
     }
 
@@ -149,10 +149,10 @@ public class ValueFlowTests
 
             class Flows
             {
-                ChatCompletionOptions A(bool playful) => new ChatCompletionOptions { {|#0:Temperature = playful ? {|#1:2.5f|} : 0.2f|} };
+                ChatCompletionOptions A(bool playful) => new ChatCompletionOptions { {|#0:Temperature = playful ? 2.5f : 0.2f|} };
             }
             """,
-            Verify.Diagnostic("SAMP005").WithLocation(0).WithLocation(1).WithMessage(
+            Verify.Diagnostic("SAMP005").WithLocation(0).WithMessage(
                 "Temperature = 2.5 is outside the range [0, 2] that openai accepts for temperature (rules table: temperance.provider.openai.temperature.max) (one branch of a conditional; the worst branch is judged)"));
     }
 
