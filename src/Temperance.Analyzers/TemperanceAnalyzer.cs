@@ -120,13 +120,14 @@ namespace Temperance
                         }
                     }
                 }
+            }
 
-                foreach (var problem in state.Policy.Problems)
+            // Configuration problems the rules ran into, once per file and key, on the block's first request.
+            foreach (var problem in state.Policy.Problems)
+            {
+                if (state.FirstReport(problem.Key))
                 {
-                    if (state.FirstReport(problem.Key))
-                    {
-                        report(Diagnostic.Create(Descriptors.InvalidConfiguration, request.Location, problem.Key, problem.Value, problem.Expected));
-                    }
+                    report(Diagnostic.Create(Descriptors.InvalidConfiguration, requests[0].Location, problem.Key, problem.Value, problem.Expected));
                 }
             }
         }

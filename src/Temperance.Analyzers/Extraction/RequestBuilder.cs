@@ -617,20 +617,7 @@ namespace Temperance.Extraction
             var instance = new Instance(request, creation, HolderOf(creation)) { IsPayload = true };
             if (initializer != null)
             {
-                foreach (var element in initializer.Initializers)
-                {
-                    switch (element)
-                    {
-                        case ISimpleAssignmentOperation { Target: IPropertyReferenceOperation { Property.IsIndexer: true, Arguments.Length: 1 } indexer } assignment
-                            when ValueReader.ConstantString(indexer.Arguments[0].Value) is { } key:
-                            ReadKey(RawJsonSurface.Keys, key, assignment.Value, assignment.Syntax, instance);
-                            break;
-                        case IInvocationOperation { TargetMethod.Name: "Add", Arguments.Length: 2 } add
-                            when ValueReader.ConstantString(add.Arguments[0].Value) is { } addKey:
-                            ReadKey(RawJsonSurface.Keys, addKey, add.Arguments[1].Value, add.Syntax, instance);
-                            break;
-                    }
-                }
+                ReadKeyedInitializer(RawJsonSurface.Keys, initializer, instance);
             }
 
             instance.PayloadSent |= IsSerialisedInPlace(creation);
@@ -737,20 +724,23 @@ namespace Temperance.Extraction
             }
         }
 
-        private void ReadBag(SurfaceDefinition surface, IObjectOrCollectionInitializerOperation initializer, Request request)
+        private void ReadBag(SurfaceDefinition surface, IObjectOrCollectionInitializerOperation initializer, Request request) =>
+            ReadKeyedInitializer(surface.Keys, initializer, new Instance(request, null, null));
+
+        /// <summary>A string-keyed initializer, in either form: <c>["temperature"] = 0.2</c> or <c>{ "temperature", 0.2 }</c>.</summary>
+        private static void ReadKeyedInitializer(IReadOnlyDictionary<string, Setting> keys, IObjectOrCollectionInitializerOperation initializer, Instance instance)
         {
-            var holder = new Instance(request, null, null);
             foreach (var element in initializer.Initializers)
             {
                 switch (element)
                 {
                     case ISimpleAssignmentOperation { Target: IPropertyReferenceOperation { Property.IsIndexer: true, Arguments.Length: 1 } indexer } assignment
                         when ValueReader.ConstantString(indexer.Arguments[0].Value) is { } key:
-                        ReadKey(surface.Keys, key, assignment.Value, assignment.Syntax, holder);
+                        ReadKey(keys, key, assignment.Value, assignment.Syntax, instance);
                         break;
                     case IInvocationOperation { TargetMethod.Name: "Add", Arguments.Length: 2 } add
                         when ValueReader.ConstantString(add.Arguments[0].Value) is { } addKey:
-                        ReadKey(surface.Keys, addKey, add.Arguments[1].Value, add.Syntax, holder);
+                        ReadKey(keys, addKey, add.Arguments[1].Value, add.Syntax, instance);
                         break;
                 }
             }

@@ -1,5 +1,4 @@
 using System.Collections.Generic;
-using System.Linq;
 using Microsoft.CodeAnalysis;
 
 namespace Temperance.Model
@@ -87,28 +86,49 @@ namespace Temperance.Model
         public ValueKind KindOf(Setting setting, out double value)
         {
             value = 0;
-            var last = writes.Where(w => w.Setting == setting).ToList();
-            if (last.Count == 0)
+            SettingWrite? tail = null;
+            foreach (var write in writes)
+            {
+                if (write.Setting == setting)
+                {
+                    tail = write;
+                }
+            }
+
+            if (tail == null)
             {
                 return OriginVisible ? ValueKind.Unset : ValueKind.Unknown;
             }
 
-            // Conditional branches: the worst (highest) known branch stands for the value; an unknown branch makes it unknown.
-            var tail = last[last.Count - 1];
             if (!tail.FromConditional)
             {
                 value = tail.Value;
                 return tail.Kind;
             }
 
-            var branches = last.Where(w => w.FromConditional && w.Location == tail.Location).ToList();
-            if (branches.Any(b => b.Kind != ValueKind.Known))
+            // Conditional branches: the worst (highest) known branch stands for the value; an unknown branch makes it unknown.
+            var worst = double.NegativeInfinity;
+            foreach (var branch in writes)
             {
-                return ValueKind.Unknown;
+                if (branch.Setting != setting || !branch.FromConditional || branch.Location != tail.Location)
+                {
+                    continue;
+                }
+
+                if (branch.Kind != ValueKind.Known)
+                {
+                    return ValueKind.Unknown;
+                }
+
+                worst = System.Math.Max(worst, branch.Value);
             }
 
-            value = branches.Max(b => b.Value);
+            value = worst;
             return ValueKind.Known;
         }
+
+        /// <summary>The task, once inferred for this request (a request belongs to one file, so to one policy).</summary>
+        internal TaskEvidence? InferredTask { get; set; }
+        internal bool TaskInferred { get; set; }
     }
 }

@@ -12,7 +12,19 @@ namespace Temperance.Policy
     {
         private static readonly HashSet<string> StructuredKinds = new HashSet<string> { "classification", "evaluation", "code", "tool_use", "extraction" };
 
+        /// <summary>The request's task, computed once: several rules ask.</summary>
         public static TaskEvidence? Infer(Request request, TemperancePolicy policy)
+        {
+            if (!request.TaskInferred)
+            {
+                request.InferredTask = Compute(request, policy);
+                request.TaskInferred = true;
+            }
+
+            return request.InferredTask;
+        }
+
+        private static TaskEvidence? Compute(Request request, TemperancePolicy policy)
         {
             var annotation = request.TaskSignals.FirstOrDefault(s => s.Source == TaskSignalSource.Annotation);
             if (annotation != null && OptionKeys.TaskKinds.Contains(annotation.Kind))

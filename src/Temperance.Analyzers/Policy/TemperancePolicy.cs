@@ -118,7 +118,9 @@ namespace Temperance.Policy
 
         /// <summary>Extra test attributes from <c>temperance.test_attributes</c> (simple or full names).</summary>
         public IReadOnlyCollection<string> TestAttributes =>
-            TryGetRaw(OptionKeys.TestAttributes, out var raw) ? Split(raw).ToArray() : Array.Empty<string>();
+            testAttributes ??= TryGetRaw(OptionKeys.TestAttributes, out var raw) ? Split(raw).ToArray() : Array.Empty<string>();
+
+        private IReadOnlyCollection<string>? testAttributes;
 
         /// <summary>The settings an IChatClient adapter drops (<c>temperance.adapter.&lt;name&gt;.drops</c>), and whether it ignores bag keys.</summary>
         public (IReadOnlyList<Setting> Drops, bool DropsBagKeys, string Key) AdapterDrops(string adapter)
