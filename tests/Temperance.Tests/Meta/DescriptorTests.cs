@@ -116,7 +116,7 @@ public class DescriptorTests
     public void RulePages_MentionOnlyKeysThatExist()
     {
         var known = RulesTable.Entries.Select(e => e.Key).ToHashSet(StringComparer.Ordinal);
-        var patterns = new[] { "temperance.task", "temperance.test_seed", "temperance.task.<kind>", "temperance.provider.<provider>", "temperance.model.<family>", "temperance.task.creative.temperature", "temperance.globalconfig", "temperance.provider.generic", "temperance.adapter.<name>", "temperance.model.harbour_reasoner", "temperance.test_attributes", "temperance.extreme_temprature" /* the misspelling SAMP100.md shows */ };
+        var patterns = new[] { "temperance.task", "temperance.test_seed", "temperance.task.<kind>", "temperance.provider.<provider>", "temperance.model.<family>", "temperance.task.creative.temperature", "temperance.globalconfig", "temperance.provider.generic", "temperance.adapter.<name>", "temperance.model.harbour_reasoner", "temperance.test_attributes", "temperance.extreme_temprature" /* the misspelling SAMP100.md shows */, "temperance.surface.<name>", "temperance.raw_json" };
         foreach (var page in Directory.GetFiles(TestReferences.RulesDirectory, "SAMP*.md"))
         {
             foreach (Match match in Regex.Matches(File.ReadAllText(page), @"temperance\.[a-z_<>.]+[a-z_>]"))
