@@ -27,7 +27,7 @@ namespace Temperance.Policy
                 "task\\.[a-z_]+\\.(temperature|max_temperature)",
                 "provider\\.[a-z_]+\\.[a-z_]+\\.(min|max|default)",
                 "provider\\.[a-z_]+\\.unset_means_default",
-                "model\\.[a-z0-9_]+\\.(match|rejects)",
+                "model\\.[a-z0-9_]+\\.(match|rejects|except)",
                 "adapter\\.[a-z0-9_]+\\.(drops|drops_bag_keys)",
                 "surface\\.[a-z0-9_]+\\.(type|provider|temperature|top_p|top_k|seed|candidates|model|response_format|sends)",
             }) + ")$",

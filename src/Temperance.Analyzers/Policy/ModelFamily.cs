@@ -8,13 +8,17 @@ namespace Temperance.Policy
     /// <summary>A family of models from the rules table: which model ids belong to it and which settings it rejects.</summary>
     internal sealed class ModelFamily
     {
-        public ModelFamily(string name, IReadOnlyList<string> prefixes, IReadOnlyList<Setting> rejects, string key)
+        public ModelFamily(string name, IReadOnlyList<string> prefixes, IReadOnlyList<Setting> rejects, string key, IReadOnlyList<string>? exceptions = null)
         {
             Name = name;
             Prefixes = prefixes;
             Rejects = rejects;
             Key = key;
+            Exceptions = exceptions ?? Array.Empty<string>();
         }
+
+        /// <summary>Prefixes inside the family that do not belong to it (a chat variant of a reasoning line).</summary>
+        public IReadOnlyList<string> Exceptions { get; }
 
         public string Name { get; }
         public IReadOnlyList<string> Prefixes { get; }
@@ -25,7 +29,10 @@ namespace Temperance.Policy
         /// A prefix matches at a word boundary: "o3" matches "o3", "o3-mini" and "o3.1", not "o30"; a trailing '*' in the
         /// table is allowed and means the same.
         /// </summary>
-        public bool Matches(string modelId) => Prefixes.Any(prefix =>
+        public bool Matches(string modelId) =>
+            Prefixes.Any(prefix => MatchesPrefix(modelId, prefix)) && !Exceptions.Any(prefix => MatchesPrefix(modelId, prefix));
+
+        private static bool MatchesPrefix(string modelId, string prefix)
         {
             var bare = prefix.TrimEnd('*');
             if (!modelId.StartsWith(bare, StringComparison.OrdinalIgnoreCase))
@@ -34,7 +41,7 @@ namespace Temperance.Policy
             }
 
             return modelId.Length == bare.Length || !char.IsLetterOrDigit(modelId[bare.Length]) || bare.EndsWith("-", StringComparison.Ordinal);
-        });
+        }
 
         public bool RejectsSetting(Setting setting) => Rejects.Contains(setting);
     }

@@ -33,6 +33,9 @@ namespace Temperance.Policy
         /// <summary><c>temperance.model.&lt;family&gt;.match</c>: comma-separated model-id prefixes of the family.</summary>
         public static string ModelMatch(string family) => $"{ModelPrefix}{family}.match";
 
+        /// <summary><c>temperance.model.&lt;family&gt;.except</c>: prefixes that match but are not in the family.</summary>
+        public static string ModelExcept(string family) => $"{ModelPrefix}{family}.except";
+
         /// <summary><c>temperance.model.&lt;family&gt;.rejects</c>: the settings the family rejects.</summary>
         public static string ModelRejects(string family) => $"{ModelPrefix}{family}.rejects";
 

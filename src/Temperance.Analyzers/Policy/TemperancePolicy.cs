@@ -199,7 +199,8 @@ namespace Temperance.Policy
                     settings.Add(setting.Value);
                 }
 
-                found.Add(new ModelFamily(name, Split(match).ToArray(), settings, OptionKeys.ModelMatch(name)));
+                TryGetRaw(OptionKeys.ModelExcept(name), out var except);
+                found.Add(new ModelFamily(name, Split(match).ToArray(), settings, OptionKeys.ModelMatch(name), Split(except).ToArray()));
             }
 
             lock (gate)

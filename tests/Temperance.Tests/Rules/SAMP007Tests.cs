@@ -54,6 +54,7 @@ public class SAMP007Tests
             {
                 ChatOptions DefaultValue() => new ChatOptions { ModelId = "o3", Temperature = 1f };
                 ChatOptions NotAFamilyMember() => new ChatOptions { ModelId = "o30-vision", Temperature = 0.2f };
+                ChatOptions ChatVariant() => new ChatOptions { ModelId = "gpt-5-chat-latest", Temperature = 0.2f }; // temperance.model.openai_reasoning.except
                 ChatOptions Chat() => new ChatOptions { ModelId = "gpt-4o", Temperature = 0.2f };
             }
             """);
