@@ -20,7 +20,7 @@ var sdks = new[] { "OpenAI", "System.ClientModel", "System.Memory.Data", "Micros
     .Select(n => MetadataReference.CreateFromFile(Path.Combine(AppContext.BaseDirectory, n + ".dll"))).Cast<MetadataReference>().ToList();
 var onlyTemperance = args.Contains("--only-temperance");
 var netAnalyzers = onlyTemperance ? ImmutableArray<DiagnosticAnalyzer>.Empty : LoadNetAnalyzers();
-var table = new Temperance.Testing.RulesTableOptions(Temperance.Testing.RulesTableOptions.FindTable());
+var table = new Temperance.Inventory.RulesTableOptions(Temperance.Inventory.RulesTableOptions.FindTable());
 Console.WriteLine($"NetAnalyzers 11.0.100: {netAnalyzers.Length} analyzers, every rule enabled");
 
 var dense = await Measure("dense", SyntheticProject.Generate(lines, dense: true), framework.Concat(sdks).ToList(), netAnalyzers, table);

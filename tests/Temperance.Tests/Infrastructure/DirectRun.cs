@@ -11,7 +11,7 @@ namespace Temperance.Tests.Infrastructure;
 /// </summary>
 public static class DirectRun
 {
-    private static readonly Lazy<Temperance.Testing.RulesTableOptions> Table = new(() => new Temperance.Testing.RulesTableOptions(TestReferences.RulesTable));
+    private static readonly Lazy<Temperance.Inventory.RulesTableOptions> Table = new(() => new Temperance.Inventory.RulesTableOptions(TestReferences.RulesTable));
 
     public sealed record Outcome(ImmutableArray<Diagnostic> Diagnostics, IReadOnlyList<Exception> AnalyzerExceptions);
 

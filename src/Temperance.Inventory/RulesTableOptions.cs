@@ -2,11 +2,11 @@ using System.Collections.Immutable;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 
-namespace Temperance.Testing;
+namespace Temperance.Inventory;
 
 /// <summary>
-/// The shipped rules table as analyzer-config options for every file, for harnesses that run the analyzer directly
-/// (robustness tests, the benchmark). Shared as a linked source file by the test and benchmark projects.
+/// The shipped rules table as analyzer-config options for every file: the inventory tool falls back to it for projects
+/// that do not reference the package, and the robustness tests and the benchmark link this file.
 /// </summary>
 public sealed class RulesTableOptions : AnalyzerConfigOptionsProvider
 {
@@ -30,9 +30,15 @@ public sealed class RulesTableOptions : AnalyzerConfigOptionsProvider
         options = new DictionaryOptions(builder.ToImmutable());
     }
 
-    /// <summary>The repository's rules/temperance.globalconfig, found above the running binaries.</summary>
+    /// <summary>The rules table shipped next to the binaries, else the repository's rules/temperance.globalconfig above them.</summary>
     public static string FindTable()
     {
+        var shipped = Path.Combine(AppContext.BaseDirectory, "temperance.globalconfig");
+        if (File.Exists(shipped))
+        {
+            return File.ReadAllText(shipped);
+        }
+
         for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir != null; dir = dir.Parent)
         {
             var path = Path.Combine(dir.FullName, "rules", "temperance.globalconfig");
@@ -46,6 +52,11 @@ public sealed class RulesTableOptions : AnalyzerConfigOptionsProvider
     }
 
     public override AnalyzerConfigOptions GlobalOptions => options;
+
+    /// <summary>The table's value for a key (used under a project's own options, which win).</summary>
+    public bool TryGetValue(string key, out string value) => options.TryGetValue(key, out value);
+
+    public IEnumerable<string> Keys => options.Keys;
 
     public override AnalyzerConfigOptions GetOptions(SyntaxTree tree) => options;
 
