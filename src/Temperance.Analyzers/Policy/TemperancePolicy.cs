@@ -43,7 +43,7 @@ namespace Temperance.Policy
     {
         private readonly AnalyzerConfigOptions treeOptions;
         private readonly AnalyzerConfigOptions globalOptions;
-        private readonly Dictionary<string, Limit?> numbers = new Dictionary<string, Limit?>(StringComparer.Ordinal);
+        private readonly System.Collections.Concurrent.ConcurrentDictionary<string, Limit?> numbers = new System.Collections.Concurrent.ConcurrentDictionary<string, Limit?>(StringComparer.Ordinal);
         private readonly List<ConfigProblem> problems = new List<ConfigProblem>();
         private readonly object gate = new object();
 
@@ -273,12 +273,9 @@ namespace Temperance.Policy
 
         private Limit? Number(string key)
         {
-            lock (gate)
+            if (numbers.TryGetValue(key, out var cached))
             {
-                if (numbers.TryGetValue(key, out var cached))
-                {
-                    return cached;
-                }
+                return cached;
             }
 
             Limit? result = null;
@@ -296,16 +293,9 @@ namespace Temperance.Policy
                 }
             }
 
-            lock (gate)
+            if (numbers.TryAdd(key, result) && problem != null)
             {
-                if (!numbers.ContainsKey(key))
-                {
-                    numbers[key] = result;
-                    if (problem != null)
-                    {
-                        problems.Add(problem);
-                    }
-                }
+                AddProblem(problem);
             }
 
             return result;

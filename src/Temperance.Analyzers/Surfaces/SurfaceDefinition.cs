@@ -20,7 +20,9 @@ namespace Temperance.Surfaces
         public string MetadataName { get; }
         /// <summary>Provider key in the rules table.</summary>
         public string Provider { get; }
-        public string ShortName => MetadataName.Substring(MetadataName.LastIndexOf('.') + 1);
+        public string ShortName => shortName ??= MetadataName.Substring(MetadataName.LastIndexOf('.') + 1);
+
+        private string? shortName;
 
         /// <summary>Typed members: member name to setting.</summary>
         public Dictionary<string, Setting> Members { get; } = new Dictionary<string, Setting>(StringComparer.Ordinal);
