@@ -137,4 +137,59 @@ public class InventoryToolTests : IClassFixture<InventoryFixture>
 
         return output.Result;
     }
+
+    [Fact]
+    public void GeneratedSolution_ListsEveryRequestOfEveryProject()
+    {
+        var root = Path.Combine(tool.Output, "generated");
+        Directory.CreateDirectory(root);
+        File.WriteAllText(Path.Combine(root, "nuget.config"), $"""
+            <?xml version="1.0" encoding="utf-8"?>
+            <configuration><packageSources><clear /><add key="restored" value="{PackageFixture.RestoredPackages}" /></packageSources></configuration>
+            """);
+        var expected = new List<(string Project, string File, double Temperature)>();
+        for (var p = 0; p < 2; p++)
+        {
+            var name = $"Berth{p}";
+            var folder = Path.Combine(root, name);
+            Directory.CreateDirectory(folder);
+            File.WriteAllText(Path.Combine(folder, name + ".csproj"), """
+                <Project Sdk="Microsoft.NET.Sdk">
+                  <PropertyGroup><TargetFramework>net10.0</TargetFramework><Nullable>enable</Nullable></PropertyGroup>
+                  <ItemGroup><PackageReference Include="OpenAI" Version="2.15.0" /></ItemGroup>
+                </Project>
+                """);
+            for (var f = 0; f < 3; f++)
+            {
+                var temperature = 0.1 * (p * 3 + f + 1);
+                var text = temperature.ToString("0.0", System.Globalization.CultureInfo.InvariantCulture);
+                File.WriteAllText(Path.Combine(folder, $"Options{f}.cs"), $$"""
+                    namespace {{name}};
+                    public static class Options{{f}}
+                    {
+                        public static OpenAI.Chat.ChatCompletionOptions Create() => new OpenAI.Chat.ChatCompletionOptions { Temperature = {{text}}f };
+                    }
+                    """);
+                expected.Add((name, $"Options{f}.cs", Math.Round(temperature, 1)));
+            }
+        }
+
+        Assert.Equal(0, DotNet.Run(root, "new sln -n Harbour --format sln").ExitCode);
+        Assert.Equal(0, DotNet.Run(root, "sln Harbour.sln add Berth0/Berth0.csproj Berth1/Berth1.csproj").ExitCode);
+        var restore = DotNet.Run(root, "restore Harbour.sln", new Dictionary<string, string> { ["NUGET_PACKAGES"] = Path.Combine(root, "packages") });
+        Assert.True(restore.ExitCode == 0, restore.ToString());
+
+        var file = Path.Combine(root, "inventory.json");
+        var run = DotNet.Run(root, $"\"{Path.Combine(tool.Output, "tool", "Temperance.Inventory.dll")}\" Harbour.sln --format json --output \"{file}\"",
+            new Dictionary<string, string> { ["NUGET_PACKAGES"] = Path.Combine(root, "packages") });
+        Assert.True(run.ExitCode == 0, run.ToString());
+
+        using var json = JsonDocument.Parse(File.ReadAllText(file));
+        var listed = json.RootElement.EnumerateArray()
+            .Select(r => (Project: r.GetProperty("project").GetString()!, File: Path.GetFileName(r.GetProperty("file").GetString()!),
+                Temperature: Math.Round(r.GetProperty("settings").GetProperty("temperature").GetProperty("value").GetDouble(), 1)))
+            .OrderBy(r => r.Project).ThenBy(r => r.File)
+            .ToList();
+        Assert.Equal(expected.OrderBy(r => r.Project).ThenBy(r => r.File).ToList(), listed);
+    }
 }
