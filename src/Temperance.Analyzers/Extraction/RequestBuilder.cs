@@ -49,7 +49,7 @@ namespace Temperance.Extraction
             }
 
             var requests = builder.instances
-                .Where(i => !i.IsPayload || (i.PayloadHasSamplingKey && i.PayloadHasModel && i.PayloadSent))
+                .Where(i => !i.IsPayload || (i.PayloadHasModel && i.PayloadSent && (i.PayloadSamplingKeys >= 2 || (i.PayloadSamplingKeys == 1 && i.PayloadHasRequestShape))))
                 .ToList();
             if (requests.Count == 0)
             {
@@ -645,6 +645,7 @@ namespace Temperance.Extraction
                 // Ollama's native API nests sampling under "options".
                 if (property.Property.Name == "options" && ValueReader.Unwrap(assignment.Value) is IAnonymousObjectCreationOperation nested)
                 {
+                    instance.PayloadHasRequestShape = true;
                     ReadAnonymous(nested, instance);
                     continue;
                 }
@@ -757,14 +758,20 @@ namespace Temperance.Extraction
 
             if (instance.IsPayload && key is "response_format" or "format")
             {
+                instance.PayloadHasRequestShape = true;
                 instance.Request.ResponseShape = ResponseShape.JsonObject;
                 instance.Request.ResponseShapeEvidence = Evidence(syntax);
                 return;
             }
 
+            if (instance.IsPayload && RawJsonSurface.RequestKeys.Contains(key))
+            {
+                instance.PayloadHasRequestShape = true;
+            }
+
             if (keys.TryGetValue(key, out var setting))
             {
-                instance.PayloadHasSamplingKey = true;
+                instance.PayloadSamplingKeys++;
                 instance.Request.AddRange(ValueReader.Read(setting, $"\"{key}\"", value, null, syntax.GetLocation()));
             }
         }
@@ -987,7 +994,9 @@ namespace Temperance.Extraction
             public ISymbol? Holder { get; }
             public bool IsPayload { get; set; }
             public bool PayloadHasModel { get; set; }
-            public bool PayloadHasSamplingKey { get; set; }
+            public int PayloadSamplingKeys { get; set; }
+            /// <summary>A key only a model request has (messages, prompt, max_tokens …), beside model and one sampling key.</summary>
+            public bool PayloadHasRequestShape { get; set; }
             public bool PayloadSent { get; set; }
         }
     }

@@ -33,6 +33,16 @@ namespace Temperance.Surfaces
             ["repeat_penalty"] = Setting.RepetitionPenalty,
         };
 
+        /// <summary>
+        /// Keys only a model request carries. A payload with "model" and a single sampling key must have one of these too:
+        /// { model = "Corolla", temperature = 21.5 } is a car's telemetry, not a request.
+        /// </summary>
+        public static readonly HashSet<string> RequestKeys = new HashSet<string>(StringComparer.Ordinal)
+        {
+            "messages", "prompt", "input", "system", "instructions", "max_tokens", "max_completion_tokens", "max_output_tokens",
+            "num_predict", "stream", "options", "response_format", "format", "tools", "stop",
+        };
+
         /// <summary>Types a payload can be built with (metadata names).</summary>
         public static readonly string[] PayloadTypes =
         {

@@ -39,7 +39,7 @@ public class SAMP007Tests
             class Planner
             {
                 ChatOptions A() => new ChatOptions { ModelId = "gpt-5-mini", {|SAMP007:TopP = 0.5f|} };
-                Task<HttpResponseMessage> B(HttpClient http) => http.PostAsJsonAsync("v1/chat/completions", new { model = "o1", {|SAMP007:temperature = 0.3|} });
+                Task<HttpResponseMessage> B(HttpClient http) => http.PostAsJsonAsync("v1/chat/completions", new { model = "o1", {|SAMP007:temperature = 0.3|}, messages = new[] { new { role = "user", content = "Plan the crossing." } } });
             }
             """);
     }

@@ -51,7 +51,7 @@ public class RawJsonSurfaceTests
             {
                 string Body()
                 {
-                    var body = new JsonObject { ["model"] = "llama3.2", {|SAMP009:["temperature"] = 2.5|} };
+                    var body = new JsonObject { ["model"] = "llama3.2", {|SAMP009:["temperature"] = 2.5|}, ["stream"] = false };
                     return body.ToJsonString();
                 }
             }
@@ -85,6 +85,23 @@ public class RawJsonSurfaceTests
             class Weather
             {
                 string Reading() => JsonSerializer.Serialize(new Dictionary<string, object> { ["temperature"] = 31.5, ["station"] = "pier-4" });
+            }
+            """);
+    }
+
+    [Fact]
+    public async Task CarTelemetryWithModelAndTemperature_DoesNotTrigger()
+    {
+        // Regression: "model" and one "temperature" alone are a car's telemetry; a model request also carries
+        // messages, a prompt, max_tokens, a second sampling key or the like.
+        await Verify.AnalyzerAsync("""
+            using System.Net.Http;
+            using System.Net.Http.Json;
+            using System.Threading.Tasks;
+
+            class Fleet
+            {
+                Task<HttpResponseMessage> Report(HttpClient http) => http.PostAsJsonAsync("telemetry", new { model = "Corolla", temperature = 21.5, odometer = 48210 });
             }
             """);
     }
@@ -127,7 +144,7 @@ public class RawJsonSurfaceTests
 
         class Proxy
         {
-            Task<HttpResponseMessage> Send(HttpClient http) => http.PostAsJsonAsync("v1/chat/completions", new { model = "gpt-4o-mini", top_p = 1.5 });
+            Task<HttpResponseMessage> Send(HttpClient http) => http.PostAsJsonAsync("v1/chat/completions", new { model = "gpt-4o-mini", top_p = 1.5, max_tokens = 200 });
         }
         """;
 
