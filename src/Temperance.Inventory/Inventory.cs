@@ -95,7 +95,7 @@ public static class Inventory
         foreach (var setting in Reported)
         {
             var kind = request.KindOf(setting, out var value);
-            var last = request.Writes.LastOrDefault(w => w.Setting == setting);
+            var last = request.LastWrite(setting);
             settings.Add(kind switch
             {
                 ValueKind.Known => new SettingRow(setting.KeyName(), value, last?.Origin ?? (last?.FromConditional == true ? "conditional (worst branch)" : "literal")),

@@ -16,7 +16,7 @@ namespace Temperance.Extraction
         private const int MaxPasses = 4;
 
         /// <summary>The exact assertion the outputs of <paramref name="sends"/> reach, or null.</summary>
-        public static (string Description, Location Location)? FindExactAssertion(IOperation send, IReadOnlyList<IOperation> blocks, ISet<IOperation> allSends)
+        public static (string Description, Location Location)? FindExactAssertion(IOperation send, IReadOnlyList<IOperation> operations, ISet<IOperation> allSends)
         {
             var tainted = new HashSet<ISymbol>(SymbolEqualityComparer.Default);
             var otherOutputs = new HashSet<ISymbol>(SymbolEqualityComparer.Default);
@@ -26,7 +26,6 @@ namespace Temperance.Extraction
                 Spread(other, otherOutputs);
             }
 
-            var operations = blocks.SelectMany(b => b.DescendantsAndSelf()).ToList();
             for (var pass = 0; pass < MaxPasses; pass++)
             {
                 var before = tainted.Count + otherOutputs.Count;

@@ -64,7 +64,7 @@ namespace Temperance.Extraction
                 {
                     if (builder.sends.TryGetValue(instance.Request, out var send))
                     {
-                        if (OutputFlow.FindExactAssertion(send, blocks, allSends) is { } assertion)
+                        if (OutputFlow.FindExactAssertion(send, builder.Operations, allSends) is { } assertion)
                         {
                             instance.Request.ExactAssertion = assertion.Description;
                             instance.Request.ExactAssertionLocation = assertion.Location;
@@ -77,7 +77,7 @@ namespace Temperance.Extraction
 
             // Task signals are read once per block and shared by its requests; names differ per holder.
             var annotation = TaskSignalReader.Annotation(context.Member);
-            var prompts = TaskSignalReader.FromPrompts(blocks).ToList();
+            var prompts = TaskSignalReader.FromPrompts(builder.Operations).ToList();
             foreach (var instance in requests)
             {
                 if (annotation != null)
@@ -401,19 +401,23 @@ namespace Temperance.Extraction
 
         private IOperation? LocalInitializer(ILocalSymbol local)
         {
-            foreach (var block in blocks)
+            if (localInitializers == null)
             {
-                foreach (var operation in block.DescendantsAndSelf())
+                localInitializers = new Dictionary<ILocalSymbol, IOperation?>(SymbolEqualityComparer.Default);
+                foreach (var declarator in Operations.OfType<IVariableDeclaratorOperation>())
                 {
-                    if (operation is IVariableDeclaratorOperation declarator && SymbolEqualityComparer.Default.Equals(declarator.Symbol, local))
-                    {
-                        return declarator.Initializer?.Value;
-                    }
+                    localInitializers[declarator.Symbol] = declarator.Initializer?.Value;
                 }
             }
 
-            return null;
+            return localInitializers.TryGetValue(local, out var initializer) ? initializer : null;
         }
+
+        /// <summary>Every operation of the block, walked once and shared by all readers (locals, prompts, test assertions).</summary>
+        private IReadOnlyList<IOperation> Operations => operations ??= blocks.SelectMany(b => b.DescendantsAndSelf()).ToList();
+
+        private IReadOnlyList<IOperation>? operations;
+        private Dictionary<ILocalSymbol, IOperation?>? localInitializers;
 
         /// <summary>
         /// A client held in a field or property initialised elsewhere in the type: read the model from syntax (no

@@ -112,11 +112,11 @@ namespace Temperance.Extraction
             }
         }
 
-        /// <summary>Constant text in the block: literals, const fields, static readonly string fields, interpolation text.</summary>
-        public static IEnumerable<TaskSignal> FromPrompts(IEnumerable<IOperation> blocks)
+        /// <summary>Constant text among the block's operations: literals, const and static readonly string fields, interpolation text.</summary>
+        public static IEnumerable<TaskSignal> FromPrompts(IEnumerable<IOperation> operations)
         {
             var seen = new HashSet<string>(StringComparer.Ordinal);
-            foreach (var text in ConstantTexts(blocks))
+            foreach (var text in ConstantTexts(operations))
             {
                 var lower = text.ToLowerInvariant();
                 foreach (var (phrase, kind) in PromptPhrases)
@@ -130,32 +130,29 @@ namespace Temperance.Extraction
             }
         }
 
-        private static IEnumerable<string> ConstantTexts(IEnumerable<IOperation> blocks)
+        private static IEnumerable<string> ConstantTexts(IEnumerable<IOperation> operations)
         {
-            foreach (var block in blocks)
+            foreach (var operation in operations)
             {
-                foreach (var operation in block.DescendantsAndSelf())
+                switch (operation)
                 {
-                    switch (operation)
-                    {
-                        case ILiteralOperation { ConstantValue: { HasValue: true, Value: string literal } } when literal.Length > 6:
-                            yield return literal;
-                            break;
-                        case IFieldReferenceOperation { Field: { } field } when field.Type.SpecialType == SpecialType.System_String:
-                            if (field.HasConstantValue && field.ConstantValue is string constant)
-                            {
-                                yield return constant;
-                            }
-                            else if (field.IsStatic && field.IsReadOnly && StaticReadonlyText(field) is { } text)
-                            {
-                                yield return text;
-                            }
+                    case ILiteralOperation { ConstantValue: { HasValue: true, Value: string literal } } when literal.Length > 6:
+                        yield return literal;
+                        break;
+                    case IFieldReferenceOperation { Field: { } field } when field.Type.SpecialType == SpecialType.System_String:
+                        if (field.HasConstantValue && field.ConstantValue is string constant)
+                        {
+                            yield return constant;
+                        }
+                        else if (field.IsStatic && field.IsReadOnly && StaticReadonlyText(field) is { } text)
+                        {
+                            yield return text;
+                        }
 
-                            break;
-                        case IInterpolatedStringTextOperation { Text.ConstantValue: { HasValue: true, Value: string part } }:
-                            yield return part;
-                            break;
-                    }
+                        break;
+                    case IInterpolatedStringTextOperation { Text.ConstantValue: { HasValue: true, Value: string part } }:
+                        yield return part;
+                        break;
                 }
             }
         }

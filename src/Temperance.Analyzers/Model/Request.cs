@@ -82,19 +82,26 @@ namespace Temperance.Model
 
         public void AddRange(IEnumerable<SettingWrite> more) => writes.AddRange(more);
 
-        /// <summary>What the request ends up with for a setting: the last unconditional write wins, in source order.</summary>
-        public ValueKind KindOf(Setting setting, out double value)
+        /// <summary>The last write of a setting in source order, or null when nobody writes it.</summary>
+        public SettingWrite? LastWrite(Setting setting)
         {
-            value = 0;
-            SettingWrite? tail = null;
+            SettingWrite? last = null;
             foreach (var write in writes)
             {
                 if (write.Setting == setting)
                 {
-                    tail = write;
+                    last = write;
                 }
             }
 
+            return last;
+        }
+
+        /// <summary>What the request ends up with for a setting: the last unconditional write wins, in source order.</summary>
+        public ValueKind KindOf(Setting setting, out double value)
+        {
+            value = 0;
+            var tail = LastWrite(setting);
             if (tail == null)
             {
                 return OriginVisible ? ValueKind.Unset : ValueKind.Unknown;

@@ -241,17 +241,9 @@ namespace Temperance.Policy
         }
 
         /// <summary>A min above its max: both keys are named so the team sees which pair is wrong.</summary>
-        public void ReportInvertedRange(Limit min, Limit max)
-        {
-            lock (gate)
-            {
-                if (!problems.Exists(p => p.Key == min.Key))
-                {
-                    problems.Add(new ConfigProblem(min.Key, min.Value.ToString(CultureInfo.InvariantCulture),
-                        $"a value no greater than '{max.Key}' ({max.Value.ToString(CultureInfo.InvariantCulture)})"));
-                }
-            }
-        }
+        public void ReportInvertedRange(Limit min, Limit max) =>
+            AddProblem(new ConfigProblem(min.Key, min.Value.ToString(CultureInfo.InvariantCulture),
+                $"a value no greater than '{max.Key}' ({max.Value.ToString(CultureInfo.InvariantCulture)})"));
 
         public bool TryGetRaw(string key, out string value)
         {

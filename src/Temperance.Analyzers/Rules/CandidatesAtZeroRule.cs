@@ -16,8 +16,8 @@ namespace Temperance.Rules
                 yield break;
             }
 
-            var candidatesWrite = request.Writes.Last(w => w.Setting == Setting.Candidates);
-            var temperatureWrite = request.Writes.Last(w => w.Setting == Setting.Temperature);
+            var candidatesWrite = request.LastWrite(Setting.Candidates)!;
+            var temperatureWrite = request.LastWrite(Setting.Temperature)!;
             var fix = new FixPlan().SetValue(candidatesWrite, 1);
             if (policy.CandidatesTemperature is { } raised)
             {

@@ -3,25 +3,23 @@ using Microsoft.CodeAnalysis;
 
 namespace Temperance.Rules
 {
-    /// <summary>What a rule found, plus the edit a fix should make (carried in diagnostic Properties).</summary>
+    /// <summary>What a rule found, plus the edits a fix should make (carried in diagnostic Properties, spans included).</summary>
     internal sealed class Finding
     {
         public Finding(DiagnosticDescriptor descriptor, Location location, FixPlan fix, params object[] messageArgs)
         {
             Descriptor = descriptor;
             Location = location;
-            AdditionalLocations = fix.Locations;
             Properties = fix.Properties;
             MessageArgs = messageArgs;
         }
 
         public DiagnosticDescriptor Descriptor { get; }
         public Location Location { get; }
-        public ImmutableArray<Location> AdditionalLocations { get; }
         public ImmutableDictionary<string, string?> Properties { get; }
         public object[] MessageArgs { get; }
 
         public Diagnostic ToDiagnostic() =>
-            Diagnostic.Create(Descriptor, Location, AdditionalLocations, Properties, MessageArgs);
+            Diagnostic.Create(Descriptor, Location, additionalLocations: null, Properties, MessageArgs);
     }
 }

@@ -1,6 +1,7 @@
 using System.Collections.Generic;
 using System.Collections.Immutable;
 using System.Globalization;
+using System.Linq;
 using Microsoft.CodeAnalysis;
 using Temperance.Model;
 
@@ -61,10 +62,9 @@ namespace Temperance.Rules
     /// <summary>Builds the numbered edits of one finding.</summary>
     internal sealed class FixPlan
     {
+        /// <summary>Where each edit applies; only their spans leave the analyzer (see <see cref="FixProperties.Span"/>).</summary>
         private readonly List<Location> locations = new List<Location>();
         private readonly ImmutableDictionary<string, string?>.Builder properties = ImmutableDictionary.CreateBuilder<string, string?>();
-
-        public static FixPlan None => new FixPlan();
 
         public FixPlan SetValue(SettingWrite write, double value)
         {
@@ -98,6 +98,46 @@ namespace Temperance.Rules
             return this;
         }
 
+        /// <summary>
+        /// Writes settings nobody has written yet, wherever the request allows: into the options creation (or a new nested
+        /// options object), else as an options argument of a call that passes none. The first setting decides the edit;
+        /// the others join it when they belong to the same object. False when there is nowhere to write.
+        /// </summary>
+        public bool AddUnset(Request request, params (Setting Setting, double Value)[] settings)
+        {
+            var (first, value) = settings[0];
+            if (request.AddTargets.TryGetValue(first, out var target))
+            {
+                AddMember(target.Creation, target.Member, value, target.Kind, target.WrapperMember, target.WrapperType).Experimental(target.Experimental);
+                foreach (var (other, otherValue) in settings.Skip(1))
+                {
+                    if (request.AddTargets.TryGetValue(other, out var more) && more.Creation == target.Creation && more.WrapperMember == target.WrapperMember)
+                    {
+                        AlsoAssign(more.Member, more.Kind, otherValue, more.Experimental);
+                    }
+                }
+
+                return true;
+            }
+
+            if (request.IsImplicit && request.OmittedParameter != null && request.OmittedOptionsType != null && request.SendingCallLocation != null
+                && request.OmittedMembers.TryGetValue(first, out var omitted))
+            {
+                AddArgument(request.SendingCallLocation, request.OmittedParameter.Name, request.OmittedOptionsType, omitted.Member, value, omitted.Kind).Experimental(omitted.Experimental);
+                foreach (var (other, otherValue) in settings.Skip(1))
+                {
+                    if (request.OmittedMembers.TryGetValue(other, out var more))
+                    {
+                        AlsoAssign(more.Member, more.Kind, otherValue, more.Experimental);
+                    }
+                }
+
+                return true;
+            }
+
+            return false;
+        }
+
         /// <summary>Adds another assignment to the last edit (an AddMember or AddArgument), and its experimental id if any.</summary>
         public FixPlan AlsoAssign(string member, NumericKind kind, double value, string? experimental)
         {
@@ -129,10 +169,6 @@ namespace Temperance.Rules
             properties[FixProperties.Combine] = "true";
             return this;
         }
-
-        public int Count => locations.Count;
-
-        public ImmutableArray<Location> Locations => ImmutableArray<Location>.Empty;
 
         public ImmutableDictionary<string, string?> Properties
         {

@@ -63,7 +63,7 @@ namespace Temperance.Rules
                 yield break;
             }
 
-            var write = request.Writes.Last(w => w.Setting == setting);
+            var write = request.LastWrite(setting)!;
             yield return new Finding(Descriptors.InertSetting, write.Location, new FixPlan().Remove(write),
                 $"{write.Member} = {FixProperties.Show(value)}", because);
         }

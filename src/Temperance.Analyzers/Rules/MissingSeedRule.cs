@@ -40,15 +40,7 @@ namespace Temperance.Rules
 
             var seed = policy.TestSeed?.Value ?? 0;
             var fix = new FixPlan();
-            if (request.AddTargets.TryGetValue(Setting.Seed, out var target))
-            {
-                fix.AddMember(target.Creation, target.Member, seed, target.Kind, target.WrapperMember, target.WrapperType).Experimental(target.Experimental);
-            }
-            else if (request.IsImplicit && request.OmittedParameter != null && request.OmittedOptionsType != null && request.SendingCallLocation != null
-                && request.OmittedMembers.TryGetValue(Setting.Seed, out var omitted))
-            {
-                fix.AddArgument(request.SendingCallLocation, request.OmittedParameter.Name, request.OmittedOptionsType, omitted.Member, seed, omitted.Kind).Experimental(omitted.Experimental);
-            }
+            fix.AddUnset(request, (Setting.Seed, seed));
 
             yield return new Finding(Descriptors.MissingSeed, request.Location, fix, why, request.Surface);
         }

@@ -43,50 +43,27 @@ namespace Temperance.Rules
 
             var seed = policy.TestSeed?.Value ?? 0;
             var fix = new FixPlan();
-            var temperatureWrite = LastWrite(request, Setting.Temperature);
             var seedUnset = request.KindOf(Setting.Seed, out _) == ValueKind.Unset && request.SeedAvailable;
-            if (temperatureWrite != null)
+            if (request.LastWrite(Setting.Temperature) is { } temperatureWrite)
             {
                 fix.SetValue(temperatureWrite, 0);
-                if (seedUnset && request.AddTargets.TryGetValue(Setting.Seed, out var seedTarget))
+                if (seedUnset)
                 {
-                    fix.AddMember(seedTarget.Creation, seedTarget.Member, seed, seedTarget.Kind, seedTarget.WrapperMember, seedTarget.WrapperType).Experimental(seedTarget.Experimental);
+                    fix.AddUnset(request, (Setting.Seed, seed));
                 }
             }
-            else if (request.TemperatureTarget is { } target)
+            else if (seedUnset)
             {
-                fix.AddMember(target.Creation, target.Member, 0, target.Kind, target.WrapperMember, target.WrapperType);
-                if (seedUnset && request.AddTargets.TryGetValue(Setting.Seed, out var seedTarget) && seedTarget.Creation == target.Creation && seedTarget.WrapperMember == target.WrapperMember)
-                {
-                    fix.AlsoAssign(seedTarget.Member, seedTarget.Kind, seed, seedTarget.Experimental);
-                }
+                fix.AddUnset(request, (Setting.Temperature, 0), (Setting.Seed, seed));
             }
-            else if (request.IsImplicit && request.OmittedParameter != null && request.OmittedOptionsType != null
-                && request.OmittedMembers.TryGetValue(Setting.Temperature, out var omitted))
+            else
             {
-                fix.AddArgument(request.SendingCallLocation, request.OmittedParameter.Name, request.OmittedOptionsType, omitted.Member, 0, omitted.Kind);
-                if (seedUnset && request.OmittedMembers.TryGetValue(Setting.Seed, out var omittedSeed))
-                {
-                    fix.AlsoAssign(omittedSeed.Member, omittedSeed.Kind, seed, omittedSeed.Experimental);
-                }
+                fix.AddUnset(request, (Setting.Temperature, 0));
             }
 
             yield return new Finding(Descriptors.RandomSamplingInExactTest, request.SendingCallLocation, fix.Combined(),
                 $"{request.ExactAssertion} in '{request.Context.Member?.Name}'", why);
         }
 
-        internal static SettingWrite? LastWrite(Request request, Setting setting)
-        {
-            SettingWrite? last = null;
-            foreach (var write in request.Writes)
-            {
-                if (write.Setting == setting)
-                {
-                    last = write;
-                }
-            }
-
-            return last;
-        }
     }
 }

@@ -46,15 +46,7 @@ namespace Temperance.Rules
                     && policy.Default(request.Provider, Setting.Temperature) is { } providerDefault
                     && providerDefault.Value > ceiling.Value:
                     var fix = new FixPlan();
-                    if (request.TemperatureTarget is { } member)
-                    {
-                        fix.AddMember(member.Creation, member.Member, target, member.Kind, member.WrapperMember, member.WrapperType);
-                    }
-                    else if (request.IsImplicit && request.OmittedParameter != null && request.OmittedOptionsType != null
-                        && request.SendingCallLocation != null && request.OmittedMembers.TryGetValue(Setting.Temperature, out var omitted))
-                    {
-                        fix.AddArgument(request.SendingCallLocation, request.OmittedParameter.Name, request.OmittedOptionsType, omitted.Member, target, omitted.Kind);
-                    }
+                    fix.AddUnset(request, (Setting.Temperature, target));
 
                     yield return new Finding(
                         Descriptors.TemperatureAboveTaskCeiling, request.Location, fix,

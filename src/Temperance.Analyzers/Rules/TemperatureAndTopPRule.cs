@@ -33,8 +33,8 @@ namespace Temperance.Rules
                 yield break;
             }
 
-            var topPWrite = request.Writes.Last(w => w.Setting == Setting.TopP);
-            var temperatureWrite = request.Writes.Last(w => w.Setting == Setting.Temperature);
+            var topPWrite = request.LastWrite(Setting.TopP)!;
+            var temperatureWrite = request.LastWrite(Setting.Temperature)!;
 
             // One mistake, one warning: a value out of range (SAMP005) or extreme (SAMP009) is the thing to fix first.
             if (ValueOutOfRangeRule.IsOutOfRange(topPWrite, request.Provider, policy, out _, out _)

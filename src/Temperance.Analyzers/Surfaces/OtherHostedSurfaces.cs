@@ -16,9 +16,9 @@ namespace Temperance.Surfaces
                 .OpenAIShape()
                 .Map("Seed", Setting.Seed)
                 .Map("N", Setting.Candidates),
-            // Anthropic 13.x has no sampling members; the request is still recognised (model, structured output).
-            new SurfaceDefinition("Anthropic.Models.Messages.MessageCreateParams", Providers.Anthropic) { ModelMember = "Model", ResponseFormatMember = "OutputConfig", HasNoSamplingMembers = true },
-            new SurfaceDefinition("Anthropic.Models.Beta.Messages.MessageCreateParams", Providers.Anthropic) { ModelMember = "Model", ResponseFormatMember = "OutputConfig", HasNoSamplingMembers = true },
+            // Anthropic 13.x has no sampling members (an empty member map); the request is still recognised (model, structured output).
+            new SurfaceDefinition("Anthropic.Models.Messages.MessageCreateParams", Providers.Anthropic) { ModelMember = "Model", ResponseFormatMember = "OutputConfig" },
+            new SurfaceDefinition("Anthropic.Models.Beta.Messages.MessageCreateParams", Providers.Anthropic) { ModelMember = "Model", ResponseFormatMember = "OutputConfig" },
         };
     }
 }

@@ -44,9 +44,6 @@ namespace Temperance.Surfaces
         public string? SentBy { get; set; }
         public List<string> SendMethods { get; } = new List<string>();
 
-        /// <summary>True for the member-less request types (Anthropic 13.x has no sampling members at all).</summary>
-        public bool HasNoSamplingMembers { get; set; }
-
         public SurfaceDefinition Map(string member, Setting setting)
         {
             Members[member] = setting;
