@@ -19,6 +19,17 @@ namespace Temperance.Extraction
         };
 
         private readonly HashSet<INamedTypeSymbol> attributes;
+        private readonly System.Collections.Concurrent.ConcurrentDictionary<(INamedTypeSymbol, string), HashSet<string>> calledFromTests =
+            new System.Collections.Concurrent.ConcurrentDictionary<(INamedTypeSymbol, string), HashSet<string>>(new TypeAndKeyComparer());
+
+        private sealed class TypeAndKeyComparer : IEqualityComparer<(INamedTypeSymbol Type, string Key)>
+        {
+            public bool Equals((INamedTypeSymbol Type, string Key) x, (INamedTypeSymbol Type, string Key) y) =>
+                x.Key == y.Key && SymbolEqualityComparer.Default.Equals(x.Type, y.Type);
+
+            public int GetHashCode((INamedTypeSymbol Type, string Key) obj) =>
+                (SymbolEqualityComparer.Default.GetHashCode(obj.Type) * 397) ^ obj.Key.GetHashCode();
+        }
 
         private TestFrameworks(HashSet<INamedTypeSymbol> attributes)
         {
@@ -58,25 +69,32 @@ namespace Temperance.Extraction
                 return false;
             }
 
-            foreach (var candidate in helper.ContainingType.GetMembers().OfType<IMethodSymbol>())
-            {
-                if (!IsTest(candidate, extraAttributes))
-                {
-                    continue;
-                }
+            return NamesCalledFromTests(helper.ContainingType, extraAttributes).Contains(helper.Name);
+        }
 
-                foreach (var reference in candidate.DeclaringSyntaxReferences)
+        /// <summary>The identifiers the test methods of a type mention, read from syntax once per type (per compilation).</summary>
+        private HashSet<string> NamesCalledFromTests(INamedTypeSymbol type, IReadOnlyCollection<string> extraAttributes) =>
+            calledFromTests.GetOrAdd((type, string.Join(",", extraAttributes)), _ =>
+            {
+                var names = new HashSet<string>(System.StringComparer.Ordinal);
+                foreach (var candidate in type.GetMembers().OfType<IMethodSymbol>())
                 {
-                    if (reference.GetSyntax().DescendantNodes().OfType<Microsoft.CodeAnalysis.CSharp.Syntax.IdentifierNameSyntax>()
-                        .Any(name => name.Identifier.ValueText == helper.Name))
+                    if (!IsTest(candidate, extraAttributes))
                     {
-                        return true;
+                        continue;
+                    }
+
+                    foreach (var reference in candidate.DeclaringSyntaxReferences)
+                    {
+                        foreach (var name in reference.GetSyntax().DescendantNodes().OfType<Microsoft.CodeAnalysis.CSharp.Syntax.IdentifierNameSyntax>())
+                        {
+                            names.Add(name.Identifier.ValueText);
+                        }
                     }
                 }
-            }
 
-            return false;
-        }
+                return names;
+            });
 
         private bool IsTest(ISymbol? member, IReadOnlyCollection<string> extraAttributes)
         {
