@@ -51,45 +51,30 @@ namespace Temperance
             }
 
             var tests = TestFrameworks.Resolve(context.Compilation);
-            var policies = new ConcurrentDictionary<SyntaxTree, TreeState>();
+            var states = new ConcurrentDictionary<SyntaxTree, TreeState>();
             var options = context.Options.AnalyzerConfigOptionsProvider;
 
-            // Per block: one operation action over the few kinds that create, change or send options, behind a filter
-            // that is a handful of symbol comparisons. Only a block where something matched is turned into requests, at
-            // its end, so every diagnostic stays local to the block (the IDE can re-run one member at a time).
-            context.RegisterOperationBlockStartAction(block =>
+            // Per block: one walk over its operations behind a filter that is a handful of symbol comparisons (walking here
+            // costs less than one registered callback per operation, and a block-start registration per member). Only a
+            // block where something matched is turned into requests, so every diagnostic stays local to the block (the IDE
+            // can re-run one member at a time).
+            context.RegisterOperationBlockAction(block =>
             {
-                BlockCollector? collector = null;
-                block.RegisterOperationAction(
-                    c =>
-                    {
-                        if (BlockCollector.IsCandidate(catalog, c.Operation))
-                        {
-                            lock (block)
-                            {
-                                collector ??= new BlockCollector(catalog);
-                                collector.OfferCandidate(c.Operation);
-                            }
-                        }
-                    },
-                    OperationKind.ObjectCreation, OperationKind.AnonymousObjectCreation, OperationKind.With, OperationKind.SimpleAssignment, OperationKind.Invocation);
-                block.RegisterOperationBlockEndAction(end =>
+                var collector = BlockCollector.Collect(catalog, block.OperationBlocks);
+                if (collector == null)
                 {
-                    if (collector == null || end.OperationBlocks.Length == 0)
-                    {
-                        return;
-                    }
+                    return;
+                }
 
-                    var tree = end.OperationBlocks[0].Syntax.SyntaxTree;
-                    var state = policies.GetOrAdd(tree, t => new TreeState(new TemperancePolicy(options.GetOptions(t), options.GlobalOptions)));
-                    var owner = OwnerOf(end.OwningSymbol);
-                    var callContext = new CallContext(owner, owner.ContainingType, tests.IsTestContext(owner, state.Policy.TestAttributes));
-                    var requests = RequestBuilder.Build(catalog, callContext, collector, end.OperationBlocks);
-                    if (requests.Count > 0)
-                    {
-                        Judge(requests, state, end.ReportDiagnostic);
-                    }
-                });
+                var tree = block.OperationBlocks[0].Syntax.SyntaxTree;
+                var state = states.GetOrAdd(tree, t => new TreeState(new TemperancePolicy(options.GetOptions(t), options.GlobalOptions)));
+                var owner = OwnerOf(block.OwningSymbol);
+                var callContext = new CallContext(owner, owner.ContainingType, tests.IsTestContext(owner, state.Policy.TestAttributes));
+                var requests = RequestBuilder.Build(catalog, callContext, collector, block.OperationBlocks);
+                if (requests.Count > 0)
+                {
+                    Judge(requests, state, block.ReportDiagnostic);
+                }
             });
         }
 

@@ -65,13 +65,8 @@ public static class Inventory
                     continue;
                 }
 
-                var collector = new BlockCollector(catalog);
-                foreach (var child in operation.DescendantsAndSelf())
-                {
-                    collector.Offer(child);
-                }
-
-                if (collector.IsEmpty)
+                var collector = BlockCollector.Collect(catalog, new[] { operation });
+                if (collector == null)
                 {
                     continue;
                 }

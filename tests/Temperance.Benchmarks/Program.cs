@@ -11,7 +11,8 @@ using Temperance;
 using Temperance.Benchmarks;
 using Temperance.CodeFixes;
 
-// Usage: dotnet run -c Release --project tests/Temperance.Benchmarks [-- --lines 100000]
+// Usage: dotnet run -c Release --project tests/Temperance.Benchmarks [-- --lines 100000] [--serial] [--only-temperance]
+//        [--dense-only]
 var lines = args.SkipWhile(a => a != "--lines").Skip(1).Select(int.Parse).DefaultIfEmpty(100_000).First();
 Console.WriteLine($"Temperance benchmark: {lines:N0} lines, {Environment.ProcessorCount} cores, {RuntimeInformationText()}");
 
@@ -19,16 +20,23 @@ var framework = Basic.Reference.Assemblies.Net100.References.All.Cast<MetadataRe
 var sdks = new[] { "OpenAI", "System.ClientModel", "System.Memory.Data", "Microsoft.Extensions.AI.Abstractions", "OllamaSharp" }
     .Select(n => MetadataReference.CreateFromFile(Path.Combine(AppContext.BaseDirectory, n + ".dll"))).Cast<MetadataReference>().ToList();
 var onlyTemperance = args.Contains("--only-temperance");
+const int Runs = 5; // each measurement is the median of this many runs
 var netAnalyzers = onlyTemperance ? ImmutableArray<DiagnosticAnalyzer>.Empty : LoadNetAnalyzers();
 var table = new Temperance.Inventory.RulesTableOptions(Temperance.Inventory.RulesTableOptions.FindTable());
 Console.WriteLine($"NetAnalyzers 11.0.100: {netAnalyzers.Length} analyzers, every rule enabled");
 
-var dense = await Measure("dense", SyntheticProject.Generate(lines, dense: true), framework.Concat(sdks).ToList(), netAnalyzers, table);
-var none = await Measure("none", SyntheticProject.Generate(lines, dense: false), framework, netAnalyzers, table);
+var dense = await Measure("dense", SyntheticProject.Generate(lines, ProjectKind.Dense), framework.Concat(sdks).ToList(), netAnalyzers, table);
+if (args.Contains("--dense-only"))
+{
+    return 0; // for profiling one project
+}
+
+var quiet = await Measure("quiet", SyntheticProject.Generate(lines, ProjectKind.Quiet), framework.Concat(sdks).ToList(), netAnalyzers, table);
+var none = await Measure("none", SyntheticProject.Generate(lines, ProjectKind.None), framework, netAnalyzers, table);
 
 Console.WriteLine();
 Console.WriteLine($"{"project",-7} {"compile ms",10} {"added ms",9} {"added/compile",14} {"telemetry ms",13} {"NetAnalyzers median ms",23} {"telemetry/median",17} {"diagnostics",12}");
-foreach (var r in new[] { dense, none })
+foreach (var r in new[] { dense, quiet, none })
 {
     Console.WriteLine($"{r.Name,-7} {r.CompileMs,10:N0} {r.MarginalMs,9:N0} {r.MarginalMs / r.CompileMs * 100,13:N2}% {r.TemperanceMs,13:N1} {r.MedianMs,23:N1} {r.TemperanceMs / Math.Max(r.MedianMs, 0.001),17:N2} {r.Diagnostics,12:N0}");
 }
@@ -44,72 +52,91 @@ return 0;
 
 static async Task<Result> Measure(string name, List<string> sources, List<MetadataReference> references, ImmutableArray<DiagnosticAnalyzer> netAnalyzers, AnalyzerConfigOptionsProvider table)
 {
+    var serial = Environment.GetCommandLineArgs().Contains("--serial"); // analyzers one at a time: steadier telemetry
     var trees = sources.Select((s, i) => CSharpSyntaxTree.ParseText(s, new CSharpParseOptions(LanguageVersion.Latest), path: $"/bench/{name}/File{i}.cs")).ToList();
     var options = new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, nullableContextOptions: NullableContextOptions.Enable)
         .WithSpecificDiagnosticOptions(netAnalyzers.SelectMany(a => a.SupportedDiagnostics).Select(d => d.Id).Distinct()
             .Select(id => new KeyValuePair<string, ReportDiagnostic>(id, ReportDiagnostic.Warn)));
     CSharpCompilation Fresh() => CSharpCompilation.Create("Bench" + name, trees, references, options);
 
-    // Compile time without analyzers: bind every declaration and method body (warm once, then measure the median of 3).
+    // Compile time without analyzers: bind every declaration and method body (warm once, then the median of the runs).
     _ = Fresh().GetDiagnostics();
     var compileTimes = new List<double>();
-    for (var i = 0; i < 3; i++)
+    for (var i = 0; i < Runs; i++)
     {
         var watch = Stopwatch.StartNew();
         _ = Fresh().GetDiagnostics();
         compileTimes.Add(watch.Elapsed.TotalMilliseconds);
     }
 
-    // Temperance's cost is measured as what it adds: the wall time of NetAnalyzers + Temperance minus NetAnalyzers
-    // alone, each on a fresh compilation, median of 3. (Per-analyzer telemetry is shown too, but it also charges an
-    // analyzer for binding it happens to trigger first, so it is noisy.)
+    var gcShare = new List<double>();
+    // Wall time of NetAnalyzers + Temperance minus NetAnalyzers alone, each on a fresh compilation: printed for
+    // information, since on two cores it moves by more than Temperance costs.
     async Task<(double Wall, ImmutableArray<Diagnostic> Diagnostics, CompilationWithAnalyzers Run)> Analyze(ImmutableArray<DiagnosticAnalyzer> set)
     {
+        // Each run starts from a collected heap, so the earlier runs' garbage is not collected inside this one's callbacks.
+        GC.Collect();
+        GC.WaitForPendingFinalizers();
+        GC.Collect();
         var run = Fresh().WithAnalyzers(set, new CompilationWithAnalyzersOptions(
-            new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty, table), onAnalyzerException: null, concurrentAnalysis: true, logAnalyzerExecutionTime: true));
+            new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty, table), onAnalyzerException: null, concurrentAnalysis: !serial, logAnalyzerExecutionTime: true));
+        var pausedBefore = GC.GetTotalPauseDuration();
         var watch = Stopwatch.StartNew();
         var found = await run.GetAnalyzerDiagnosticsAsync();
+        gcShare.Add((GC.GetTotalPauseDuration() - pausedBefore).TotalMilliseconds / watch.Elapsed.TotalMilliseconds);
         return (watch.Elapsed.TotalMilliseconds, found, run);
     }
 
+    // Telemetry is taken from every run and each analyzer's median kept: a single run charges whichever analyzer first
+    // needs a lazily built compiler structure, which moves between runs.
     var temperance = new TemperanceAnalyzer();
     var all = netAnalyzers.Add(temperance);
     var baseline = new List<double>();
     var with = new List<double>();
-    (double Wall, ImmutableArray<Diagnostic> Diagnostics, CompilationWithAnalyzers Run) last = default;
-    for (var i = 0; i < 3; i++)
+    var telemetry = all.ToDictionary(a => a, _ => new List<double>());
+    ImmutableArray<Diagnostic> diagnostics = default;
+    var actions = 0;
+    for (var i = 0; i < Runs; i++)
     {
         if (!netAnalyzers.IsEmpty)
         {
             baseline.Add((await Analyze(netAnalyzers)).Wall);
         }
 
-        last = await Analyze(all);
-        with.Add(last.Wall);
+        var run = await Analyze(all);
+        with.Add(run.Wall);
+        diagnostics = run.Diagnostics;
+        foreach (var analyzer in all)
+        {
+            var info = await run.Run.GetAnalyzerTelemetryInfoAsync(analyzer, CancellationToken.None);
+            telemetry[analyzer].Add(info.ExecutionTime.TotalMilliseconds);
+            if (analyzer == temperance)
+            {
+                actions = info.OperationBlockStartActionsCount + info.OperationBlockActionsCount + info.OperationActionsCount + info.SyntaxNodeActionsCount
+                    + info.SymbolActionsCount + info.CompilationEndActionsCount + info.SemanticModelActionsCount + info.SyntaxTreeActionsCount;
+            }
+        }
     }
 
-    var diagnostics = last.Diagnostics;
-    var withAnalyzers = last.Run!;
-    var times = new List<double>();
-    foreach (var analyzer in netAnalyzers)
-    {
-        times.Add((await withAnalyzers.GetAnalyzerTelemetryInfoAsync(analyzer, CancellationToken.None)).ExecutionTime.TotalMilliseconds);
-    }
-
-    var info = await withAnalyzers.GetAnalyzerTelemetryInfoAsync(temperance, CancellationToken.None);
-    var actions = info.OperationBlockStartActionsCount + info.OperationBlockActionsCount + info.OperationActionsCount + info.SyntaxNodeActionsCount
-        + info.SymbolActionsCount + info.CompilationEndActionsCount + info.SemanticModelActionsCount + info.SyntaxTreeActionsCount;
-    times.Sort();
+    var times = netAnalyzers.Select(a => Median(telemetry[a])).OrderBy(t => t).ToList();
     if (times.Count == 0)
     {
         times.Add(double.NaN);
     }
 
+    var ourTime = Median(telemetry[temperance]);
+    if (netAnalyzers.Length > 0)
+    {
+        var rank = times.Count(t => t > ourTime);
+        Console.WriteLine($"{name}: NetAnalyzers telemetry per analyzer (median of {Runs} runs): p25 {times[times.Count / 4]:N1} ms, median {times[times.Count / 2]:N1} ms,"
+            + $" p75 {times[times.Count * 3 / 4]:N1} ms, p90 {times[times.Count * 9 / 10]:N1} ms, max {times[^1]:N1} ms; {rank} of {times.Count} cost more than Temperance ({ourTime:N1} ms)");
+    }
+
     var ours = diagnostics.Count(d => d.Id.StartsWith("SAMP", StringComparison.Ordinal));
     var marginal = baseline.Count == 0 ? double.NaN : Median(with) - Median(baseline);
     Console.WriteLine($"{name}: {trees.Count} files, {sources.Sum(s => s.Split('\n').Length):N0} lines, {ours:N0} Temperance diagnostics, {diagnostics.Length:N0} in all;"
-        + $" analyzers wall {Median(baseline):N0} ms without Temperance, {Median(with):N0} ms with");
-    return new Result(name, Median(compileTimes), info.ExecutionTime.TotalMilliseconds, times[times.Count / 2], ours, actions, marginal);
+        + $" analyzers wall {Median(baseline):N0} ms without Temperance, {Median(with):N0} ms with; GC pauses {Median(gcShare) * 100:N0}% of analysis wall time");
+    return new Result(name, Median(compileTimes), ourTime, times[times.Count / 2], ours, actions, marginal);
 }
 
 static ImmutableArray<DiagnosticAnalyzer> LoadNetAnalyzers()
@@ -126,7 +153,7 @@ static ImmutableArray<DiagnosticAnalyzer> LoadNetAnalyzers()
 static async Task TimeCodeFix(List<MetadataReference> references, AnalyzerConfigOptionsProvider table)
 {
     // A 5,000-line file with requests throughout: time one SAMP005 fix, computed and applied.
-    var source = string.Join("\n", SyntheticProject.Generate(5_000, dense: true));
+    var source = string.Join("\n", SyntheticProject.Generate(5_000, ProjectKind.Dense));
     source = string.Join("\n", source.Split('\n').Where(l => !l.StartsWith("using ", StringComparison.Ordinal) && !l.StartsWith("namespace ", StringComparison.Ordinal)));
     source = "using System; using System.Collections.Generic; using System.Linq; using OpenAI.Chat; using Microsoft.Extensions.AI; using OllamaSharp.Models;\nnamespace Ferry;\n" + source;
     using var workspace = new AdhocWorkspace();

@@ -4,14 +4,22 @@ namespace Temperance.Benchmarks;
 
 /// <summary>
 /// Generates a project of a given size. "dense": one LLM request per ~50 lines, mixing the value flows the rules look at;
+/// "quiet": the same ordinary code in a project that references the SDKs but makes no request (what the filter costs);
 /// "none": the same ordinary code with no request and no LLM SDK.
 /// </summary>
+public enum ProjectKind
+{
+    Dense,
+    Quiet,
+    None,
+}
+
 public static class SyntheticProject
 {
     private const int LinesPerMethod = 50;
     private const int MethodsPerFile = 10;
 
-    public static List<string> Generate(int lines, bool dense)
+    public static List<string> Generate(int lines, ProjectKind kind)
     {
         var methods = Math.Max(1, lines / LinesPerMethod);
         var files = new List<string>();
@@ -19,7 +27,7 @@ public static class SyntheticProject
         {
             var text = new StringBuilder();
             text.AppendLine("using System;").AppendLine("using System.Collections.Generic;").AppendLine("using System.Linq;");
-            if (dense)
+            if (kind != ProjectKind.None)
             {
                 text.AppendLine("using OpenAI.Chat;").AppendLine("using Microsoft.Extensions.AI;").AppendLine("using OllamaSharp.Models;");
             }
@@ -30,7 +38,7 @@ public static class SyntheticProject
             {
                 var index = file * MethodsPerFile + m;
                 Filler(text, index);
-                if (dense)
+                if (kind == ProjectKind.Dense)
                 {
                     Request(text, index);
                 }

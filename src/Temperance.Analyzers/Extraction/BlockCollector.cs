@@ -11,32 +11,36 @@ namespace Temperance.Extraction
     /// </summary>
     internal sealed class BlockCollector
     {
-        private readonly SurfaceCatalog catalog;
-
-        public BlockCollector(SurfaceCatalog catalog)
+        private BlockCollector()
         {
-            this.catalog = catalog;
         }
 
         public List<IOperation> Creations { get; } = new List<IOperation>();
         public List<ISimpleAssignmentOperation> Mutations { get; } = new List<ISimpleAssignmentOperation>();
         public List<IInvocationOperation> Invocations { get; } = new List<IInvocationOperation>();
 
-        public bool IsEmpty => Creations.Count == 0 && Mutations.Count == 0 && Invocations.Count == 0;
-
-        /// <summary>Keeps an operation if it could belong to a request.</summary>
-        public void Offer(IOperation operation)
+        /// <summary>
+        /// Walks the operations of one block and keeps those that could belong to a request; null when none could (the
+        /// common case, which then allocates nothing but the walk).
+        /// </summary>
+        public static BlockCollector? Collect(SurfaceCatalog catalog, IEnumerable<IOperation> blocks)
         {
-            if (!IsCandidate(catalog, operation))
+            BlockCollector? collector = null;
+            foreach (var block in blocks)
             {
-                return;
+                foreach (var operation in block.DescendantsAndSelf())
+                {
+                    if (IsCandidate(catalog, operation))
+                    {
+                        (collector ??= new BlockCollector()).OfferCandidate(operation);
+                    }
+                }
             }
 
-            OfferCandidate(operation);
+            return collector;
         }
 
-        /// <summary>Keeps an operation that already passed <see cref="IsCandidate"/>.</summary>
-        public void OfferCandidate(IOperation operation)
+        private void OfferCandidate(IOperation operation)
         {
             switch (operation)
             {
@@ -50,15 +54,41 @@ namespace Temperance.Extraction
         /// Whether an operation could belong to a request. The analyzer runs this on every operation of the kinds it
         /// registers, so it allocates nothing and stays a handful of symbol comparisons.
         /// </summary>
-        public static bool IsCandidate(SurfaceCatalog catalog, IOperation operation) => operation switch
+        public static bool IsCandidate(SurfaceCatalog catalog, IOperation operation) => operation.Kind switch
         {
-            IObjectCreationOperation creation => catalog.Find(creation.Type) != null || (creation.Initializer != null && catalog.IsPayloadType(creation.Type)),
-            IAnonymousObjectCreationOperation anonymous => catalog.RawJsonEnabled && HasModelMember(anonymous),
-            IWithOperation with => catalog.Find(with.Type) != null,
-            ISimpleAssignmentOperation assignment => IsMutation(catalog, assignment),
-            IInvocationOperation invocation => IsRelevantCall(catalog, invocation),
+            // The kind is a field read; most operations of a block leave here without a type test.
+            OperationKind.ObjectCreation => operation is IObjectCreationOperation creation && (catalog.Find(creation.Type) != null
+                || (creation.Initializer != null && catalog.IsPayloadType(creation.Type) && HasRequestKey(creation.Initializer))),
+            OperationKind.AnonymousObjectCreation => catalog.RawJsonEnabled && operation is IAnonymousObjectCreationOperation anonymous && HasModelMember(anonymous),
+            OperationKind.With => catalog.Find(operation.Type) != null,
+            OperationKind.SimpleAssignment => operation is ISimpleAssignmentOperation assignment && IsMutation(catalog, assignment),
+            OperationKind.Invocation => operation is IInvocationOperation invocation && IsRelevantCall(catalog, invocation),
             _ => false,
         };
+
+        /// <summary>
+        /// A dictionary or JsonObject is a payload only if its initializer names a key a request carries ("model", a
+        /// sampling key, "messages" …): a lookup table such as <c>{ ["label"] = … }</c> never reaches the builder.
+        /// </summary>
+        private static bool HasRequestKey(IObjectOrCollectionInitializerOperation initializer)
+        {
+            foreach (var element in initializer.Initializers)
+            {
+                var key = element switch
+                {
+                    ISimpleAssignmentOperation { Target: IPropertyReferenceOperation { Property.IsIndexer: true, Arguments.Length: 1 } indexer } =>
+                        ValueReader.ConstantString(indexer.Arguments[0].Value),
+                    IInvocationOperation { TargetMethod.Name: "Add", Arguments.Length: 2 } add => ValueReader.ConstantString(add.Arguments[0].Value),
+                    _ => null,
+                };
+                if (key != null && (key == RawJsonSurface.ModelKey || RawJsonSurface.Keys.ContainsKey(key) || RawJsonSurface.RequestKeys.Contains(key)))
+                {
+                    return true;
+                }
+            }
+
+            return false;
+        }
 
         /// <summary>A payload needs a "model" member; that check is a string compare on a handful of names.</summary>
         private static bool HasModelMember(IAnonymousObjectCreationOperation creation)

@@ -545,8 +545,16 @@ namespace Temperance.Extraction
         }
 
         /// <summary>The member of a surface type that carries a setting, with its literal type and experimental id (cached per compilation).</summary>
-        private (string Name, NumericKind Kind, string? Experimental)? MemberFor(ITypeSymbol type, SurfaceDefinition surface, Setting setting) =>
-            catalog.MemberCache.GetOrAdd((type, setting), key => FindMember(key.Type, surface, key.Setting));
+        private (string Name, NumericKind Kind, string? Experimental)? MemberFor(ITypeSymbol type, SurfaceDefinition surface, Setting setting)
+        {
+            // Looked up first so the common hit allocates no closure.
+            if (catalog.MemberCache.TryGetValue((type, setting), out var cached))
+            {
+                return cached;
+            }
+
+            return catalog.MemberCache.GetOrAdd((type, setting), FindMember(type, surface, setting));
+        }
 
         private static (string Name, NumericKind Kind, string? Experimental)? FindMember(ITypeSymbol type, SurfaceDefinition surface, Setting setting)
         {

@@ -22,7 +22,7 @@ namespace Temperance.Extraction
 
         // Identifier words, after splitting on case and digits. Words that are ambiguous in ordinary code
         // ("query", "chat", "reply") are left out on purpose.
-        private static readonly Dictionary<string, string> NameWords = new Dictionary<string, string>(StringComparer.Ordinal)
+        internal static readonly Dictionary<string, string> NameWords = new Dictionary<string, string>(StringComparer.Ordinal)
         {
             ["extract"] = "extraction", ["extractor"] = "extraction", ["extraction"] = "extraction", ["parse"] = "extraction", ["parser"] = "extraction",
             ["classify"] = "classification", ["classifier"] = "classification", ["classification"] = "classification",
@@ -55,7 +55,6 @@ namespace Temperance.Extraction
             ("write a poem", "creative"), ("write a story", "creative"), ("short story", "creative"), ("poem about", "creative"),
         };
 
-        private static readonly Regex Words = new Regex("[A-Z]+(?![a-z])|[A-Z]?[a-z]+", RegexOptions.CultureInvariant);
 
         /// <summary>An explicit <c>[LlmTask("kind")]</c> on the member, or on its type or an enclosing type.</summary>
         public static TaskSignal? Annotation(ISymbol? member)
@@ -101,16 +100,82 @@ namespace Temperance.Extraction
 
             foreach (var (name, what) in named)
             {
-                foreach (Match word in Words.Matches(name))
+                if (KindOfName(name) is { } kind)
                 {
-                    if (NameWords.TryGetValue(word.Value.ToLowerInvariant(), out var kind))
-                    {
-                        yield return new TaskSignal(kind, TaskSignalSource.Name, $"the {what} '{name}'");
-                        break;
-                    }
+                    yield return new TaskSignal(kind, TaskSignalSource.Name, $"the {what} '{name}'");
                 }
             }
         }
+
+        /// <summary>
+        /// The task of the first task word in an identifier. Words split as in PascalCase: "SQLQuery" is "SQL" + "Query",
+        /// digits and underscores separate, and an acronym's last capital starts the next word. Hand-written rather than a
+        /// regular expression because it runs for every request.
+        /// </summary>
+        internal static string? KindOfName(string name)
+        {
+            var i = 0;
+            while (i < name.Length)
+            {
+                if (IsUpper(name[i]))
+                {
+                    var end = i;
+                    while (end < name.Length && IsUpper(name[end]))
+                    {
+                        end++;
+                    }
+
+                    if (end < name.Length && IsLower(name[end]))
+                    {
+                        if (end - 1 > i && Lookup(name, i, end - 1) is { } acronym)
+                        {
+                            return acronym;
+                        }
+
+                        i = end - 1; // the last capital begins a word such as "Query"
+                    }
+                    else
+                    {
+                        if (Lookup(name, i, end) is { } upper)
+                        {
+                            return upper;
+                        }
+
+                        i = end;
+                        continue;
+                    }
+                }
+
+                if (i < name.Length && (IsLower(name[i]) || IsUpper(name[i])))
+                {
+                    var end = i + 1;
+                    while (end < name.Length && IsLower(name[end]))
+                    {
+                        end++;
+                    }
+
+                    if (Lookup(name, i, end) is { } word)
+                    {
+                        return word;
+                    }
+
+                    i = end;
+                }
+                else
+                {
+                    i++;
+                }
+            }
+
+            return null;
+        }
+
+        private static bool IsUpper(char c) => c >= 'A' && c <= 'Z';
+
+        private static bool IsLower(char c) => c >= 'a' && c <= 'z';
+
+        private static string? Lookup(string name, int start, int end) =>
+            end - start >= 3 && NameWords.TryGetValue(name.Substring(start, end - start).ToLowerInvariant(), out var kind) ? kind : null;
 
         /// <summary>Constant text among the block's operations: literals, const and static readonly string fields, interpolation text.</summary>
         public static IEnumerable<TaskSignal> FromPrompts(IEnumerable<IOperation> operations)

@@ -29,12 +29,24 @@ namespace Temperance.Policy
         /// A prefix matches at a word boundary: "o3" matches "o3", "o3-mini" and "o3.1", not "o30"; a trailing '*' in the
         /// table is allowed and means the same.
         /// </summary>
-        public bool Matches(string modelId) =>
-            Prefixes.Any(prefix => MatchesPrefix(modelId, prefix)) && !Exceptions.Any(prefix => MatchesPrefix(modelId, prefix));
+        public bool Matches(string modelId) => MatchesAny(modelId, Prefixes) && !MatchesAny(modelId, Exceptions);
+
+        private static bool MatchesAny(string modelId, IReadOnlyList<string> prefixes)
+        {
+            for (var i = 0; i < prefixes.Count; i++)
+            {
+                if (MatchesPrefix(modelId, prefixes[i]))
+                {
+                    return true;
+                }
+            }
+
+            return false;
+        }
 
         private static bool MatchesPrefix(string modelId, string prefix)
         {
-            var bare = prefix.TrimEnd('*');
+            var bare = prefix.Length > 0 && prefix[prefix.Length - 1] == '*' ? prefix.TrimEnd('*') : prefix;
             if (!modelId.StartsWith(bare, StringComparison.OrdinalIgnoreCase))
             {
                 return false;

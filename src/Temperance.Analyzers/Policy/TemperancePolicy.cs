@@ -46,6 +46,7 @@ namespace Temperance.Policy
         private readonly System.Collections.Concurrent.ConcurrentDictionary<string, Limit?> numbers = new System.Collections.Concurrent.ConcurrentDictionary<string, Limit?>(StringComparer.Ordinal);
         private readonly List<ConfigProblem> problems = new List<ConfigProblem>();
         private readonly object gate = new object();
+        private int problemCount;
 
         public TemperancePolicy(AnalyzerConfigOptions treeOptions, AnalyzerConfigOptions globalOptions)
         {
@@ -62,6 +63,11 @@ namespace Temperance.Policy
         {
             get
             {
+                if (System.Threading.Volatile.Read(ref problemCount) == 0)
+                {
+                    return Array.Empty<ConfigProblem>(); // the usual case, asked once per block: no lock
+                }
+
                 lock (gate)
                 {
                     return problems.ToArray();
@@ -71,17 +77,46 @@ namespace Temperance.Policy
 
         public Limit? ExtremeTemperature => Number(OptionKeys.ExtremeTemperature);
 
-        public Limit? Min(string provider, Setting setting) => Number(OptionKeys.ProviderLimit(provider, setting, "min"));
+        public Limit? Min(string provider, Setting setting) => Lookup(provider, setting, "min");
 
-        public Limit? Max(string provider, Setting setting) => Number(OptionKeys.ProviderLimit(provider, setting, "max"));
+        public Limit? Max(string provider, Setting setting) => Lookup(provider, setting, "max");
 
-        public Limit? Default(string provider, Setting setting) => Number(OptionKeys.ProviderLimit(provider, setting, "default"));
+        public Limit? Default(string provider, Setting setting) => Lookup(provider, setting, "default");
 
         /// <summary>The temperature fixes write for a task (<c>temperance.task.&lt;kind&gt;.temperature</c>).</summary>
-        public Limit? TaskTemperatureOf(string kind) => Number(OptionKeys.TaskTemperature(kind));
+        public Limit? TaskTemperatureOf(string kind) => Lookup(kind, Setting.Temperature, TaskTemperatureBound);
 
         /// <summary>The ceiling SAMP001 applies to a task; null for kinds without one (creative, brainstorming).</summary>
-        public Limit? TaskCeiling(string kind) => Number(OptionKeys.TaskCeiling(kind));
+        public Limit? TaskCeiling(string kind) => Lookup(kind, Setting.Temperature, TaskCeilingBound);
+
+        private const string TaskTemperatureBound = "task temperature";
+        private const string TaskCeilingBound = "task ceiling";
+
+        /// <summary>
+        /// A provider bound or task value, cached by its parts: every rule asks for a few of them per request, and building
+        /// the key string each time cost more than the rule itself.
+        /// </summary>
+        private Limit? Lookup(string subject, Setting setting, string bound)
+        {
+            var id = (subject, setting, bound);
+            if (limits.TryGetValue(id, out var cached))
+            {
+                return cached;
+            }
+
+            var key = bound switch
+            {
+                TaskTemperatureBound => OptionKeys.TaskTemperature(subject),
+                TaskCeilingBound => OptionKeys.TaskCeiling(subject),
+                _ => OptionKeys.ProviderLimit(subject, setting, bound),
+            };
+            var limit = Number(key);
+            limits.TryAdd(id, limit);
+            return limit;
+        }
+
+        private readonly System.Collections.Concurrent.ConcurrentDictionary<(string Subject, Setting Setting, string Bound), Limit?> limits =
+            new System.Collections.Concurrent.ConcurrentDictionary<(string, Setting, string), Limit?>();
 
         /// <summary>The temperature SAMP008's second fix raises to, so several candidates can differ.</summary>
         public Limit? CandidatesTemperature => Number(OptionKeys.CandidatesTemperature);
@@ -90,30 +125,43 @@ namespace Temperance.Policy
         /// Whether an unset temperature really means the provider's documented default. False where something outside the
         /// call may fill it in (an Ollama Modelfile, an IChatClient pipeline's ConfigureOptions), so SAMP001 stays silent.
         /// </summary>
-        public bool UnsetMeansDefault(string provider) => Flag(OptionKeys.UnsetMeansDefault(provider)) ?? false;
+        public bool UnsetMeansDefault(string provider)
+        {
+            if (!unsetMeansDefault.TryGetValue(provider, out var value))
+            {
+                value = Flag(OptionKeys.UnsetMeansDefault(provider)) ?? false;
+                unsetMeansDefault.TryAdd(provider, value);
+            }
+
+            return value;
+        }
+
+        private readonly System.Collections.Concurrent.ConcurrentDictionary<string, bool> unsetMeansDefault =
+            new System.Collections.Concurrent.ConcurrentDictionary<string, bool>(StringComparer.Ordinal);
 
         /// <summary>The seed fixes write (<c>temperance.test_seed</c>).</summary>
         public Limit? TestSeed => Number(OptionKeys.TestSeed);
 
         /// <summary>Where SAMP003 asks for a seed: tests (default), always, or never.</summary>
-        public string RequireSeed
+        public string RequireSeed => requireSeed ??= ReadRequireSeed();
+
+        private string? requireSeed;
+
+        private string ReadRequireSeed()
         {
-            get
+            if (!TryGetRaw(OptionKeys.RequireSeed, out var raw) || raw.Length == 0)
             {
-                if (!TryGetRaw(OptionKeys.RequireSeed, out var raw) || raw.Length == 0)
-                {
-                    return "tests";
-                }
-
-                var value = raw.ToLowerInvariant();
-                if (value is "tests" or "always" or "never")
-                {
-                    return value;
-                }
-
-                AddProblem(new ConfigProblem(OptionKeys.RequireSeed, raw, "tests, always or never"));
-                return "never";
+                return "tests";
             }
+
+            var value = raw.ToLowerInvariant();
+            if (value is "tests" or "always" or "never")
+            {
+                return value;
+            }
+
+            AddProblem(new ConfigProblem(OptionKeys.RequireSeed, raw, "tests, always or never"));
+            return "never";
         }
 
         /// <summary>Extra test attributes from <c>temperance.test_attributes</c> (simple or full names).</summary>
@@ -153,27 +201,36 @@ namespace Temperance.Policy
                 return null;
             }
 
+            // Several rules ask per request, and a file holds few distinct model ids.
+            if (familyByModel.TryGetValue(modelId, out var known))
+            {
+                return known;
+            }
+
+            ModelFamily? found = null;
             foreach (var family in Families())
             {
                 if (family.Matches(modelId))
                 {
-                    return family;
+                    found = family;
+                    break;
                 }
             }
 
-            return null;
+            familyByModel.TryAdd(modelId, found);
+            return found;
         }
+
+        private readonly System.Collections.Concurrent.ConcurrentDictionary<string, ModelFamily?> familyByModel =
+            new System.Collections.Concurrent.ConcurrentDictionary<string, ModelFamily?>(StringComparer.Ordinal);
 
         private IReadOnlyList<ModelFamily>? families;
 
         private IReadOnlyList<ModelFamily> Families()
         {
-            lock (gate)
+            if (System.Threading.Volatile.Read(ref families) is { } known)
             {
-                if (families != null)
-                {
-                    return families;
-                }
+                return known;
             }
 
             var found = new List<ModelFamily>();
@@ -220,6 +277,7 @@ namespace Temperance.Policy
                 if (!problems.Exists(p => p.Key == problem.Key))
                 {
                     problems.Add(problem);
+                    System.Threading.Volatile.Write(ref problemCount, problems.Count);
                 }
             }
         }
@@ -307,6 +365,7 @@ namespace Temperance.Policy
             }
 
             problems.Add(new ConfigProblem(OptionKeys.Task, raw, "one of " + string.Join(", ", OptionKeys.TaskKinds)));
+            problemCount = problems.Count;
             return null;
         }
     }

@@ -25,23 +25,30 @@ namespace Temperance.Rules
         /// <summary>Add a named options argument <c>param: new Type { Member = literal }</c> to the call at the location.</summary>
         public const string AddArgument = "AddArgument";
 
-        public static string Edit(int index) => $"Temperance.Edit.{index}";
-        public static string Value(int index) => $"Temperance.Value.{index}";
-        public static string NumericKind(int index) => $"Temperance.NumericKind.{index}";
-        public static string Member(int index) => $"Temperance.Member.{index}";
-        public static string Wrapper(int index) => $"Temperance.Wrapper.{index}";
-        public static string TypeName(int index) => $"Temperance.Type.{index}";
-        public static string Parameter(int index) => $"Temperance.Parameter.{index}";
+        public static string Edit(int index) => Numbered("Temperance.Edit.", index);
+        public static string Value(int index) => Numbered("Temperance.Value.", index);
+        public static string NumericKind(int index) => Numbered("Temperance.NumericKind.", index);
+        public static string Member(int index) => Numbered("Temperance.Member.", index);
+        public static string Wrapper(int index) => Numbered("Temperance.Wrapper.", index);
+        public static string TypeName(int index) => Numbered("Temperance.Type.", index);
+        public static string Parameter(int index) => Numbered("Temperance.Parameter.", index);
         /// <summary>
         /// Where edit <c>i</c> applies, as "start:length" in the diagnostic's own file. Carried as a property rather than
         /// an additional location: the compiler checks every location of every diagnostic for generated code, which was
         /// most of Temperance's cost on a dense project.
         /// </summary>
-        public static string Span(int index) => $"Temperance.Span.{index}";
+        public static string Span(int index) => Numbered("Temperance.Span.", index);
         /// <summary>More assignments for the same edit, "Member|Kind|Value" joined by ';' (temperature and seed together).</summary>
-        public static string Extra(int index) => $"Temperance.Extra.{index}";
+        public static string Extra(int index) => Numbered("Temperance.Extra.", index);
         /// <summary>Experimental-API diagnostic the edited code raises (OPENAI001): the fix wraps the statement in a pragma.</summary>
-        public static string Experimental(int index) => $"Temperance.Experimental.{index}";
+        public static string Experimental(int index) => Numbered("Temperance.Experimental.", index);
+
+        /// <summary>Property names of the first few edits are made once; every diagnostic carries several.</summary>
+        private static readonly System.Collections.Concurrent.ConcurrentDictionary<(string Prefix, int Index), string> Names =
+            new System.Collections.Concurrent.ConcurrentDictionary<(string, int), string>();
+
+        private static string Numbered(string prefix, int index) =>
+            Names.TryGetValue((prefix, index), out var name) ? name : Names.GetOrAdd((prefix, index), prefix + index.ToString(CultureInfo.InvariantCulture));
 
         /// <summary>"true" when all edits form one code action (SAMP002 sets temperature and seed together).</summary>
         public const string Combine = "Temperance.Combine";
@@ -142,7 +149,7 @@ namespace Temperance.Rules
         public FixPlan AlsoAssign(string member, NumericKind kind, double value, string? experimental)
         {
             var index = locations.Count - 1;
-            var entry = $"{member}|{kind}|{value.ToString("R", CultureInfo.InvariantCulture)}";
+            var entry = $"{member}|{KindNames[(int)kind]}|{value.ToString("R", CultureInfo.InvariantCulture)}";
             properties.TryGetValue(FixProperties.Extra(index), out var existing);
             properties[FixProperties.Extra(index)] = string.IsNullOrEmpty(existing) ? entry : existing + ";" + entry;
             if (experimental != null)
@@ -179,6 +186,9 @@ namespace Temperance.Rules
             }
         }
 
+        /// <summary>NumericKind names by value (Enum.ToString goes through reflection on every call).</summary>
+        private static readonly string[] KindNames = ((NumericKind[])System.Enum.GetValues(typeof(NumericKind))).OrderBy(k => (int)k).Select(k => k.ToString()).ToArray();
+
         private int Add(string edit, Location location, double value, NumericKind kind, string member)
         {
             var index = locations.Count;
@@ -186,7 +196,7 @@ namespace Temperance.Rules
             properties[FixProperties.Span(index)] = $"{location.SourceSpan.Start.ToString(CultureInfo.InvariantCulture)}:{location.SourceSpan.Length.ToString(CultureInfo.InvariantCulture)}";
             properties[FixProperties.Edit(index)] = edit;
             properties[FixProperties.Value(index)] = value.ToString("R", CultureInfo.InvariantCulture);
-            properties[FixProperties.NumericKind(index)] = kind.ToString();
+            properties[FixProperties.NumericKind(index)] = KindNames[(int)kind];
             properties[FixProperties.Member(index)] = member;
             return index;
         }

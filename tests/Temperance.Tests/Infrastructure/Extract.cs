@@ -48,13 +48,8 @@ public static class Extract
             var owner = node is Microsoft.CodeAnalysis.CSharp.Syntax.EqualsValueClauseSyntax or Microsoft.CodeAnalysis.CSharp.Syntax.ArrowExpressionClauseSyntax
                 ? model.GetDeclaredSymbol(node.Parent is Microsoft.CodeAnalysis.CSharp.Syntax.VariableDeclaratorSyntax v ? v : node.Parent!)
                 : model.GetDeclaredSymbol(node);
-            var collector = new BlockCollector(catalog);
-            foreach (var op in operation.DescendantsAndSelf())
-            {
-                collector.Offer(op);
-            }
-
-            if (!collector.IsEmpty)
+            var collector = BlockCollector.Collect(catalog, new[] { operation });
+            if (collector != null)
             {
                 requests.AddRange(RequestBuilder.Build(catalog, new CallContext(owner, owner?.ContainingType, tests.IsTest(owner)), collector, new[] { operation }));
             }

@@ -20,6 +20,18 @@ public class DeterminismTests
         Assert.Equal(Render(parallel), Render(again));
     }
 
+    [Fact]
+    public async Task SyntheticDenseProject_GivesTheSameDiagnostics_ConcurrentOrNot()
+    {
+        var compilation = DirectRun.Compile(Temperance.Benchmarks.SyntheticProject.Generate(3_000, Temperance.Benchmarks.ProjectKind.Dense));
+        var serial = await DirectRun.AnalyzeAsync(compilation, concurrent: false);
+        var parallel = await DirectRun.AnalyzeAsync(compilation, concurrent: true);
+
+        Assert.Empty(serial.AnalyzerExceptions);
+        Assert.True(serial.Diagnostics.Length >= 50, "the dense project has a request every ~45 lines: " + serial.Diagnostics.Length);
+        Assert.Equal(Render(serial), Render(parallel));
+    }
+
     private static string[] Render(DirectRun.Outcome outcome) =>
         outcome.Diagnostics
             .Select(d => $"{d.Location.GetLineSpan()} {d.Id} {d.GetMessage(System.Globalization.CultureInfo.InvariantCulture)} [{string.Join(",", d.Properties.OrderBy(p => p.Key).Select(p => p.Key + "=" + p.Value))}]")
