@@ -12,7 +12,7 @@ using Temperance.Benchmarks;
 using Temperance.CodeFixes;
 
 // Usage: dotnet run -c Release --project tests/Temperance.Benchmarks [-- --lines 100000] [--serial] [--only-temperance]
-//        [--dense-only]
+//        [--only dense|quiet|none] [--phases]
 var lines = args.SkipWhile(a => a != "--lines").Skip(1).Select(int.Parse).DefaultIfEmpty(100_000).First();
 Console.WriteLine($"Temperance benchmark: {lines:N0} lines, {Environment.ProcessorCount} cores, {RuntimeInformationText()}");
 
@@ -25,12 +25,23 @@ var netAnalyzers = onlyTemperance ? ImmutableArray<DiagnosticAnalyzer>.Empty : L
 var table = new Temperance.Inventory.RulesTableOptions(Temperance.Inventory.RulesTableOptions.FindTable());
 Console.WriteLine($"NetAnalyzers 11.0.100: {netAnalyzers.Length} analyzers, every rule enabled");
 
-var dense = await Measure("dense", SyntheticProject.Generate(lines, ProjectKind.Dense), framework.Concat(sdks).ToList(), netAnalyzers, table);
-if (args.Contains("--dense-only"))
+if (args.Contains("--phases"))
 {
-    return 0; // for profiling one project
+    Phases.Print(SyntheticProject.Generate(lines, ProjectKind.Dense), framework.Concat(sdks).ToList(), table, Runs);
+    Phases.Print(SyntheticProject.Generate(lines, ProjectKind.Quiet), framework.Concat(sdks).ToList(), table, Runs);
+    return 0;
 }
 
+// --only dense|quiet|none measures one project (for profiling); the summary needs all three.
+var only = args.SkipWhile(a => a != "--only").Skip(1).FirstOrDefault();
+if (only != null)
+{
+    var kind = Enum.Parse<ProjectKind>(only, ignoreCase: true);
+    await Measure(only, SyntheticProject.Generate(lines, kind), kind == ProjectKind.None ? framework : framework.Concat(sdks).ToList(), netAnalyzers, table);
+    return 0;
+}
+
+var dense = await Measure("dense", SyntheticProject.Generate(lines, ProjectKind.Dense), framework.Concat(sdks).ToList(), netAnalyzers, table);
 var quiet = await Measure("quiet", SyntheticProject.Generate(lines, ProjectKind.Quiet), framework.Concat(sdks).ToList(), netAnalyzers, table);
 var none = await Measure("none", SyntheticProject.Generate(lines, ProjectKind.None), framework, netAnalyzers, table);
 

@@ -11,7 +11,7 @@ namespace Temperance.Extraction
     /// </summary>
     internal sealed class BlockCollector
     {
-        private BlockCollector()
+        public BlockCollector()
         {
         }
 
@@ -20,27 +20,52 @@ namespace Temperance.Extraction
         public List<IInvocationOperation> Invocations { get; } = new List<IInvocationOperation>();
 
         /// <summary>
-        /// Walks the operations of one block and keeps those that could belong to a request; null when none could (the
-        /// common case, which then allocates nothing but the walk).
+        /// For the tools that run outside the compiler's driver (inventory, tests, benchmark phases): walks the operations
+        /// of a block and keeps those that could belong to a request; null when none could. The analyzer gets the same
+        /// operations from the driver's own walk instead.
         /// </summary>
-        public static BlockCollector? Collect(SurfaceCatalog catalog, IEnumerable<IOperation> blocks)
+        public static BlockCollector? Collect(SurfaceCatalog catalog, IReadOnlyList<IOperation> blocks)
         {
+            // An explicit stack of child enumerators (no recursion: a long string concatenation nests thousands deep),
+            // reused per thread so the walk allocates nothing.
+            var stack = walkStack ??= new Stack<IOperation.OperationList.Enumerator>();
+            stack.Clear();
             BlockCollector? collector = null;
-            foreach (var block in blocks)
+            for (var i = 0; i < blocks.Count; i++)
             {
-                foreach (var operation in block.DescendantsAndSelf())
+                Offer(catalog, blocks[i], ref collector);
+                stack.Push(blocks[i].ChildOperations.GetEnumerator());
+                while (stack.Count > 0)
                 {
-                    if (IsCandidate(catalog, operation))
+                    var children = stack.Pop();
+                    if (!children.MoveNext())
                     {
-                        (collector ??= new BlockCollector()).OfferCandidate(operation);
+                        continue;
                     }
+
+                    var child = children.Current;
+                    stack.Push(children);
+                    Offer(catalog, child, ref collector);
+                    stack.Push(child.ChildOperations.GetEnumerator());
                 }
             }
 
             return collector;
         }
 
-        private void OfferCandidate(IOperation operation)
+        [System.ThreadStatic]
+        private static Stack<IOperation.OperationList.Enumerator>? walkStack;
+
+        private static void Offer(SurfaceCatalog catalog, IOperation operation, ref BlockCollector? collector)
+        {
+            if (IsCandidate(catalog, operation))
+            {
+                (collector ??= new BlockCollector()).OfferCandidate(operation);
+            }
+        }
+
+        /// <summary>Keeps an operation that passed <see cref="IsCandidate"/>.</summary>
+        public void OfferCandidate(IOperation operation)
         {
             switch (operation)
             {

@@ -28,26 +28,8 @@ public static class Extract
         var catalog = SurfaceCatalog.Resolve(compilation);
         var tests = TestFrameworks.Resolve(compilation);
         var requests = new List<Request>();
-        foreach (var node in tree.GetRoot().DescendantNodes())
+        foreach (var (operation, owner) in MemberBlocks.Of(tree, model))
         {
-            // The same blocks the analyzer sees: method/accessor bodies and field/property initializers.
-            if (node is not (Microsoft.CodeAnalysis.CSharp.Syntax.BaseMethodDeclarationSyntax
-                or Microsoft.CodeAnalysis.CSharp.Syntax.AccessorDeclarationSyntax
-                or Microsoft.CodeAnalysis.CSharp.Syntax.EqualsValueClauseSyntax { Parent: Microsoft.CodeAnalysis.CSharp.Syntax.VariableDeclaratorSyntax { Parent.Parent: Microsoft.CodeAnalysis.CSharp.Syntax.FieldDeclarationSyntax } or Microsoft.CodeAnalysis.CSharp.Syntax.PropertyDeclarationSyntax }
-                or Microsoft.CodeAnalysis.CSharp.Syntax.ArrowExpressionClauseSyntax { Parent: Microsoft.CodeAnalysis.CSharp.Syntax.PropertyDeclarationSyntax }))
-            {
-                continue;
-            }
-
-            var operation = model.GetOperation(node);
-            if (operation == null)
-            {
-                continue;
-            }
-
-            var owner = node is Microsoft.CodeAnalysis.CSharp.Syntax.EqualsValueClauseSyntax or Microsoft.CodeAnalysis.CSharp.Syntax.ArrowExpressionClauseSyntax
-                ? model.GetDeclaredSymbol(node.Parent is Microsoft.CodeAnalysis.CSharp.Syntax.VariableDeclaratorSyntax v ? v : node.Parent!)
-                : model.GetDeclaredSymbol(node);
             var collector = BlockCollector.Collect(catalog, new[] { operation });
             if (collector != null)
             {
