@@ -54,10 +54,6 @@ namespace Temperance
             var states = new ConcurrentDictionary<SyntaxTree, TreeState>();
             var options = context.Options.AnalyzerConfigOptionsProvider;
 
-            // Per block: one walk over its operations behind a filter that is a handful of symbol comparisons (walking here
-            // costs less than one registered callback per operation, and a block-start registration per member). Only a
-            // block where something matched is turned into requests, so every diagnostic stays local to the block (the IDE
-            // can re-run one member at a time).
             // Per block: one operation action over the few kinds that create, change or send options, behind a filter that
             // is a handful of symbol comparisons. The driver walks each block's operations once for every analyzer, so
             // riding on its walk is cheaper than a walk of our own (measured with the benchmark's quiet project). Only a

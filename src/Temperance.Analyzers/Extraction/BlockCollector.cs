@@ -11,10 +11,6 @@ namespace Temperance.Extraction
     /// </summary>
     internal sealed class BlockCollector
     {
-        public BlockCollector()
-        {
-        }
-
         public List<IOperation> Creations { get; } = new List<IOperation>();
         public List<ISimpleAssignmentOperation> Mutations { get; } = new List<ISimpleAssignmentOperation>();
         public List<IInvocationOperation> Invocations { get; } = new List<IInvocationOperation>();
@@ -26,42 +22,19 @@ namespace Temperance.Extraction
         /// </summary>
         public static BlockCollector? Collect(SurfaceCatalog catalog, IReadOnlyList<IOperation> blocks)
         {
-            // An explicit stack of child enumerators (no recursion: a long string concatenation nests thousands deep),
-            // reused per thread so the walk allocates nothing.
-            var stack = walkStack ??= new Stack<IOperation.OperationList.Enumerator>();
-            stack.Clear();
             BlockCollector? collector = null;
-            for (var i = 0; i < blocks.Count; i++)
+            foreach (var block in blocks)
             {
-                Offer(catalog, blocks[i], ref collector);
-                stack.Push(blocks[i].ChildOperations.GetEnumerator());
-                while (stack.Count > 0)
+                foreach (var operation in block.DescendantsAndSelf())
                 {
-                    var children = stack.Pop();
-                    if (!children.MoveNext())
+                    if (IsCandidate(catalog, operation))
                     {
-                        continue;
+                        (collector ??= new BlockCollector()).OfferCandidate(operation);
                     }
-
-                    var child = children.Current;
-                    stack.Push(children);
-                    Offer(catalog, child, ref collector);
-                    stack.Push(child.ChildOperations.GetEnumerator());
                 }
             }
 
             return collector;
-        }
-
-        [System.ThreadStatic]
-        private static Stack<IOperation.OperationList.Enumerator>? walkStack;
-
-        private static void Offer(SurfaceCatalog catalog, IOperation operation, ref BlockCollector? collector)
-        {
-            if (IsCandidate(catalog, operation))
-            {
-                (collector ??= new BlockCollector()).OfferCandidate(operation);
-            }
         }
 
         /// <summary>Keeps an operation that passed <see cref="IsCandidate"/>.</summary>

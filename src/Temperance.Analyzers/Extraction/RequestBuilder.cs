@@ -32,7 +32,21 @@ namespace Temperance.Extraction
         public static IReadOnlyList<Request> Build(SurfaceCatalog catalog, CallContext context, BlockCollector collected, IReadOnlyList<IOperation> blocks)
         {
             var builder = new RequestBuilder(catalog, context, blocks);
-            var clones = collected.Invocations.Where(builder.IsClone).Cast<IOperation>();
+            // A Clone() call starts a request like a creation does; every other call is read after the mutations.
+            var clones = new List<IOperation>();
+            var calls = new List<IInvocationOperation>();
+            foreach (var invocation in collected.Invocations)
+            {
+                if (builder.IsClone(invocation))
+                {
+                    clones.Add(invocation);
+                }
+                else
+                {
+                    calls.Add(invocation);
+                }
+            }
+
             foreach (var creation in collected.Creations.Concat(clones).OrderBy(c => c.Syntax.SpanStart))
             {
                 builder.AddCreation(creation);
@@ -43,7 +57,7 @@ namespace Temperance.Extraction
                 builder.AddMutation(mutation);
             }
 
-            foreach (var invocation in collected.Invocations.Where(i => !builder.IsClone(i)).OrderBy(i => i.Syntax.SpanStart))
+            foreach (var invocation in calls.OrderBy(i => i.Syntax.SpanStart))
             {
                 builder.AddInvocation(invocation);
             }
