@@ -117,9 +117,16 @@ namespace Temperance.Extraction
             var i = 0;
             while (i < name.Length)
             {
-                if (IsUpper(name[i]))
+                if (!IsUpper(name[i]) && !IsLower(name[i]))
                 {
-                    var end = i;
+                    i++;
+                    continue;
+                }
+
+                var end = i + 1;
+                if (IsUpper(name[i]) && end < name.Length && IsUpper(name[end]))
+                {
+                    // An acronym runs up to the capital that starts the next word: "SQLQuery" gives "SQL".
                     while (end < name.Length && IsUpper(name[end]))
                     {
                         end++;
@@ -127,44 +134,23 @@ namespace Temperance.Extraction
 
                     if (end < name.Length && IsLower(name[end]))
                     {
-                        if (end - 1 > i && Lookup(name, i, end - 1) is { } acronym)
-                        {
-                            return acronym;
-                        }
-
-                        i = end - 1; // the last capital begins a word such as "Query"
-                    }
-                    else
-                    {
-                        if (Lookup(name, i, end) is { } upper)
-                        {
-                            return upper;
-                        }
-
-                        i = end;
-                        continue;
+                        end--;
                     }
                 }
-
-                if (i < name.Length && (IsLower(name[i]) || IsUpper(name[i])))
+                else
                 {
-                    var end = i + 1;
                     while (end < name.Length && IsLower(name[end]))
                     {
                         end++;
                     }
-
-                    if (Lookup(name, i, end) is { } word)
-                    {
-                        return word;
-                    }
-
-                    i = end;
                 }
-                else
+
+                if (Lookup(name, i, end) is { } kind)
                 {
-                    i++;
+                    return kind;
                 }
+
+                i = end;
             }
 
             return null;

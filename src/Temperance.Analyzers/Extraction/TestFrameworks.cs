@@ -20,16 +20,7 @@ namespace Temperance.Extraction
 
         private readonly HashSet<INamedTypeSymbol> attributes;
         private readonly System.Collections.Concurrent.ConcurrentDictionary<(INamedTypeSymbol, string), HashSet<string>> calledFromTests =
-            new System.Collections.Concurrent.ConcurrentDictionary<(INamedTypeSymbol, string), HashSet<string>>(new TypeAndKeyComparer());
-
-        private sealed class TypeAndKeyComparer : IEqualityComparer<(INamedTypeSymbol Type, string Key)>
-        {
-            public bool Equals((INamedTypeSymbol Type, string Key) x, (INamedTypeSymbol Type, string Key) y) =>
-                x.Key == y.Key && SymbolEqualityComparer.Default.Equals(x.Type, y.Type);
-
-            public int GetHashCode((INamedTypeSymbol Type, string Key) obj) =>
-                (SymbolEqualityComparer.Default.GetHashCode(obj.Type) * 397) ^ obj.Key.GetHashCode();
-        }
+            new System.Collections.Concurrent.ConcurrentDictionary<(INamedTypeSymbol, string), HashSet<string>>(SymbolKeyComparer<INamedTypeSymbol, string>.Instance);
 
         private TestFrameworks(HashSet<INamedTypeSymbol> attributes)
         {

@@ -35,16 +35,7 @@ namespace Temperance.Surfaces
 
         /// <summary>Per compilation: which member of a surface type carries a setting (attribute decoding is not free).</summary>
         public System.Collections.Concurrent.ConcurrentDictionary<(ITypeSymbol Type, Model.Setting Setting), (string Name, Model.NumericKind Kind, string? Experimental)?> MemberCache { get; } =
-            new System.Collections.Concurrent.ConcurrentDictionary<(ITypeSymbol, Model.Setting), (string, Model.NumericKind, string?)?>(new TypeSettingComparer());
-
-        private sealed class TypeSettingComparer : IEqualityComparer<(ITypeSymbol Type, Model.Setting Setting)>
-        {
-            public bool Equals((ITypeSymbol Type, Model.Setting Setting) x, (ITypeSymbol Type, Model.Setting Setting) y) =>
-                x.Setting == y.Setting && SymbolEqualityComparer.Default.Equals(x.Type, y.Type);
-
-            public int GetHashCode((ITypeSymbol Type, Model.Setting Setting) obj) =>
-                (SymbolEqualityComparer.Default.GetHashCode(obj.Type) * 397) ^ (int)obj.Setting;
-        }
+            new System.Collections.Concurrent.ConcurrentDictionary<(ITypeSymbol, Model.Setting), (string, Model.NumericKind, string?)?>(SymbolKeyComparer<ITypeSymbol, Model.Setting>.Instance);
 
         /// <summary>Whether hand-built JSON payloads are looked for in this compilation.</summary>
         public bool RawJsonEnabled { get; private set; }
