@@ -25,7 +25,8 @@ namespace Temperance
         public override void Initialize(AnalysisContext context)
         {
             context.EnableConcurrentExecution();
-            context.ConfigureGeneratedCodeAnalysis(GeneratedCodeAnalysisFlags.None);
+            // Generated code is skipped by GeneratedCode below, per block, instead of by the driver per diagnostic (see there why).
+            context.ConfigureGeneratedCodeAnalysis(GeneratedCodeAnalysisFlags.Analyze | GeneratedCodeAnalysisFlags.ReportDiagnostics);
             context.RegisterCompilationStartAction(OnCompilationStart);
         }
 
@@ -53,6 +54,7 @@ namespace Temperance
             var tests = TestFrameworks.Resolve(context.Compilation);
             var states = new ConcurrentDictionary<SyntaxTree, TreeState>();
             var options = context.Options.AnalyzerConfigOptionsProvider;
+            var generated = new GeneratedCode(context.Compilation, options);
 
             // Per block: one operation action over the few kinds that create, change or send options, behind a filter that
             // is a handful of symbol comparisons. The driver walks each block's operations once for every analyzer, so
@@ -61,6 +63,11 @@ namespace Temperance
             // block (the IDE can re-run one member at a time).
             context.RegisterOperationBlockStartAction(start =>
             {
+                if (start.OperationBlocks.Length == 0 || generated.Contains(start.OperationBlocks[0].Syntax.SyntaxTree, start.OwningSymbol, start.CancellationToken))
+                {
+                    return;
+                }
+
                 BlockCollector? collector = null;
                 start.RegisterOperationAction(
                     c =>

@@ -143,6 +143,11 @@ static async Task<Result> Measure(string name, List<string> sources, List<Metada
             + $" p75 {times[times.Count * 3 / 4]:N1} ms, p90 {times[times.Count * 9 / 10]:N1} ms, max {times[^1]:N1} ms; {rank} of {times.Count} cost more than Temperance ({ourTime:N1} ms)");
     }
 
+    else
+    {
+        Console.WriteLine($"{name}: Temperance telemetry (median of {Runs} runs) {ourTime:N1} ms");
+    }
+
     var ours = diagnostics.Count(d => d.Id.StartsWith("SAMP", StringComparison.Ordinal));
     var marginal = baseline.Count == 0 ? double.NaN : Median(with) - Median(baseline);
     Console.WriteLine($"{name}: {trees.Count} files, {sources.Sum(s => s.Split('\n').Length):N0} lines, {ours:N0} Temperance diagnostics, {diagnostics.Length:N0} in all;"
