@@ -101,11 +101,12 @@ namespace Temperance
             });
         }
 
-        /// <summary>The operation kinds <see cref="BlockCollector.IsCandidate"/> can accept; made once, not per block.</summary>
-        private static readonly OperationKind[] CandidateKinds =
-        {
-            OperationKind.ObjectCreation, OperationKind.AnonymousObjectCreation, OperationKind.With, OperationKind.SimpleAssignment, OperationKind.Invocation,
-        };
+        /// <summary>
+        /// The operation kinds <see cref="BlockCollector.IsCandidate"/> can accept; made once, not per block (the params
+        /// overload of RegisterOperationAction copies its array on every call).
+        /// </summary>
+        internal static readonly ImmutableArray<OperationKind> CandidateKinds = ImmutableArray.Create(
+            OperationKind.ObjectCreation, OperationKind.AnonymousObjectCreation, OperationKind.With, OperationKind.SimpleAssignment, OperationKind.Invocation);
 
         /// <summary>The member a block belongs to: lambdas and local functions count as their containing member.</summary>
         private static ISymbol OwnerOf(ISymbol symbol)

@@ -25,6 +25,9 @@ public static class Phases
         var catalog = SurfaceCatalog.Resolve(compilation);
         var tests = TestFrameworks.Resolve(compilation);
 
+        var walkBytes = 0L;
+        var buildBytes = 0L;
+        var judgeBytes = 0L;
         var walk = new List<double>();
         var build = new List<double>();
         var judge = new List<double>();
@@ -33,6 +36,7 @@ public static class Phases
         var findings = 0;
         for (var run = 0; run <= runs; run++)
         {
+            var allocated = GC.GetAllocatedBytesForCurrentThread();
             var watch = Stopwatch.StartNew();
             var collected = new List<(BlockCollector Collector, IOperation Block, ISymbol? Owner, SyntaxTree Tree)>();
             foreach (var (block, owner, tree) in blocks)
@@ -44,6 +48,8 @@ public static class Phases
             }
 
             var walkMs = watch.Elapsed.TotalMilliseconds;
+            walkBytes = GC.GetAllocatedBytesForCurrentThread() - allocated;
+            allocated = GC.GetAllocatedBytesForCurrentThread();
             watch.Restart();
             var requests = new List<(Request Request, SyntaxTree Tree)>();
             foreach (var (collector, block, owner, tree) in collected)
@@ -53,6 +59,8 @@ public static class Phases
             }
 
             var buildMs = watch.Elapsed.TotalMilliseconds;
+            buildBytes = GC.GetAllocatedBytesForCurrentThread() - allocated;
+            allocated = GC.GetAllocatedBytesForCurrentThread();
             watch.Restart();
             var policies = new Dictionary<SyntaxTree, TemperancePolicy>();
             var reported = 0;
@@ -73,6 +81,7 @@ public static class Phases
                 }
             }
 
+            judgeBytes = GC.GetAllocatedBytesForCurrentThread() - allocated;
             if (run > 0)
             {
                 walk.Add(walkMs);
@@ -87,5 +96,10 @@ public static class Phases
         Console.WriteLine($"phases, warm, outside the driver (median of {runs}): {blocks.Count:N0} blocks walked in {Median(walk):N1} ms ({Median(walk) * 1000 / blocks.Count:N1} µs each);"
             + $" {candidates:N0} candidate blocks built into {requestCount:N0} requests in {Median(build):N1} ms ({Median(build) * 1000 / Math.Max(requestCount, 1):N1} µs per request);"
             + $" rules and {findings:N0} diagnostics in {Median(judge):N1} ms ({Median(judge) * 1000 / Math.Max(requestCount, 1):N1} µs per request)");
+        // Allocation matters as much as time here: inside the compiler every gen0 collection walks a heap holding the whole
+        // bound compilation, and whoever allocates when it is due pays for it.
+        Console.WriteLine($"allocated (last run): walk {walkBytes / 1024.0:N0} KiB ({(double)walkBytes / blocks.Count:N0} B per block),"
+            + $" build {buildBytes / 1024.0:N0} KiB ({(double)buildBytes / Math.Max(requestCount, 1):N0} B per request),"
+            + $" rules and diagnostics {judgeBytes / 1024.0:N0} KiB ({(double)judgeBytes / Math.Max(requestCount, 1):N0} B per request)");
     }
 }

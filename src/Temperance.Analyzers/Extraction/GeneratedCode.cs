@@ -5,6 +5,7 @@ using System.Threading;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp;
 using Microsoft.CodeAnalysis.Diagnostics;
+using Temperance.Surfaces;
 
 namespace Temperance.Extraction
 {
@@ -31,13 +32,13 @@ namespace Temperance.Extraction
 
         public GeneratedCode(Compilation compilation, AnalyzerConfigOptionsProvider options)
         {
-            generatedCodeAttribute = compilation.GetTypeByMetadataName("System.CodeDom.Compiler.GeneratedCodeAttribute");
+            generatedCodeAttribute = TypeLookup.Find(compilation, "System.CodeDom.Compiler.GeneratedCodeAttribute");
             treeOptions = compilation.Options.SyntaxTreeOptionsProvider;
             this.options = options;
         }
 
         /// <summary>True when a block of <paramref name="owner"/> in <paramref name="tree"/> is generated code.</summary>
-        public bool Contains(SyntaxTree tree, ISymbol owner, CancellationToken cancellationToken) =>
+        public bool Contains(SyntaxTree tree, ISymbol? owner, CancellationToken cancellationToken) =>
             trees.GetOrAdd(tree, t => IsGeneratedTree(t, cancellationToken)) || HasGeneratedCodeAttribute(owner);
 
         private bool IsGeneratedTree(SyntaxTree tree, CancellationToken cancellationToken)

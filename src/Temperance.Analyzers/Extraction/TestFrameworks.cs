@@ -1,13 +1,14 @@
 using System.Collections.Generic;
 using System.Linq;
 using Microsoft.CodeAnalysis;
+using Temperance.Surfaces;
 
 namespace Temperance.Extraction
 {
     /// <summary>Test-method attributes of xUnit, NUnit and MSTest, resolved by symbol once per compilation.</summary>
     internal sealed class TestFrameworks
     {
-        private static readonly string[] AttributeNames =
+        internal static readonly string[] AttributeNames =
         {
             "Xunit.FactAttribute",
             "Xunit.TheoryAttribute",
@@ -32,7 +33,7 @@ namespace Temperance.Extraction
             var found = new HashSet<INamedTypeSymbol>(SymbolEqualityComparer.Default);
             foreach (var name in AttributeNames)
             {
-                if (compilation.GetTypeByMetadataName(name) is { } type)
+                if (TypeLookup.Find(compilation, name) is { } type)
                 {
                     found.Add(type);
                 }

@@ -93,7 +93,7 @@ namespace Temperance.Policy
         {
             string Key(string part) => $"{SurfacePrefix}{name}.{part}";
             var typeKey = Key("type");
-            if (compilation.GetTypeByMetadataName(values[typeKey]) is not { } type)
+            if (TypeLookup.Find(compilation, values[typeKey]) is not { } type)
             {
                 Problems.Add(new ConfigProblem(typeKey, values[typeKey], "the full metadata name of a type in this compilation or its references (e.g. Contoso.Llm.GenerationSettings)"));
                 return;
@@ -162,7 +162,7 @@ namespace Temperance.Policy
             foreach (var entry in list.Split(new[] { ',' }, StringSplitOptions.RemoveEmptyEntries).Select(e => e.Trim()))
             {
                 var dot = entry.LastIndexOf('.');
-                var client = dot > 0 ? compilation.GetTypeByMetadataName(entry.Substring(0, dot)) : null;
+                var client = dot > 0 ? TypeLookup.Find(compilation, entry.Substring(0, dot)) : null;
                 var method = dot > 0 ? entry.Substring(dot + 1) : string.Empty;
                 if (client == null || !client.GetMembers(method).OfType<IMethodSymbol>().Any())
                 {

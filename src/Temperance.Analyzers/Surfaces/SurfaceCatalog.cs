@@ -54,7 +54,7 @@ namespace Temperance.Surfaces
             var byType = new Dictionary<INamedTypeSymbol, SurfaceDefinition>(SymbolEqualityComparer.Default);
             foreach (var definition in all)
             {
-                if (compilation.GetTypeByMetadataName(definition.MetadataName) is { } type)
+                if (TypeLookup.Find(compilation, definition.MetadataName) is { } type)
                 {
                     byType[type] = definition;
                 }
@@ -63,7 +63,7 @@ namespace Temperance.Surfaces
             var sendMethods = new Dictionary<INamedTypeSymbol, (SurfaceDefinition, HashSet<string>)>(SymbolEqualityComparer.Default);
             foreach (var definition in all)
             {
-                if (definition.SentBy != null && compilation.GetTypeByMetadataName(definition.SentBy) is { } client)
+                if (definition.SentBy != null && TypeLookup.Find(compilation, definition.SentBy) is { } client)
                 {
                     sendMethods[client] = (definition, new HashSet<string>(definition.SendMethods, System.StringComparer.Ordinal));
                 }
@@ -73,16 +73,16 @@ namespace Temperance.Surfaces
             var catalog = new SurfaceCatalog(
                 byType,
                 sendMethods,
-                rawJsonOn ? compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[0]) : null,
-                rawJsonOn ? compilation.GetTypeByMetadataName(RawJsonSurface.PayloadTypes[1]) : null)
+                rawJsonOn ? TypeLookup.Find(compilation, RawJsonSurface.PayloadTypes[0]) : null,
+                rawJsonOn ? TypeLookup.Find(compilation, RawJsonSurface.PayloadTypes[1]) : null)
             {
                 RawJsonEnabled = rawJsonOn,
             };
             foreach (var adapter in AdapterSurfaces.All)
             {
-                if (compilation.GetTypeByMetadataName(adapter.DeclaringType) is { } declaring)
+                if (TypeLookup.Find(compilation, adapter.DeclaringType) is { } declaring)
                 {
-                    var receiver = adapter.ReceiverType == null ? null : compilation.GetTypeByMetadataName(adapter.ReceiverType);
+                    var receiver = adapter.ReceiverType == null ? null : TypeLookup.Find(compilation, adapter.ReceiverType);
                     if (adapter.ReceiverType == null || receiver != null)
                     {
                         catalog.adapters.Add((adapter, declaring, receiver));
