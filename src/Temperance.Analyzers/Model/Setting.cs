@@ -34,10 +34,13 @@ namespace Temperance.Model
             _ => setting.ToString().ToLowerInvariant(),
         };
 
+        /// <summary>Every setting, made once (Enum.GetValues allocates a new array per call).</summary>
+        private static readonly Setting[] AllSettings = (Setting[])System.Enum.GetValues(typeof(Setting));
+
         /// <summary>The setting a trade name stands for, or null.</summary>
         public static Setting? Parse(string name)
         {
-            foreach (Setting setting in System.Enum.GetValues(typeof(Setting)))
+            foreach (var setting in AllSettings)
             {
                 if (string.Equals(setting.KeyName(), name.Trim(), System.StringComparison.OrdinalIgnoreCase))
                 {
