@@ -56,7 +56,9 @@ namespace Temperance.Extraction
                 return true;
             }
 
-            if (member is not IMethodSymbol { MethodKind: MethodKind.Ordinary } helper || helper.ContainingType == null)
+            // No test framework referenced and no team test attribute: nothing can be a test, so no helper of one either.
+            if ((attributes.Count == 0 && extraAttributes.Count == 0)
+                || member is not IMethodSymbol { MethodKind: MethodKind.Ordinary } helper || helper.ContainingType == null)
             {
                 return false;
             }
@@ -66,7 +68,7 @@ namespace Temperance.Extraction
 
         /// <summary>The identifiers the test methods of a type mention, read from syntax once per type (per compilation).</summary>
         private HashSet<string> NamesCalledFromTests(INamedTypeSymbol type, IReadOnlyCollection<string> extraAttributes) =>
-            calledFromTests.GetOrAdd((type, string.Join(",", extraAttributes)), _ =>
+            calledFromTests.GetOrAdd((type, extraAttributes.Count == 0 ? string.Empty : string.Join(",", extraAttributes)), _ =>
             {
                 var names = new HashSet<string>(System.StringComparer.Ordinal);
                 foreach (var candidate in type.GetMembers().OfType<IMethodSymbol>())

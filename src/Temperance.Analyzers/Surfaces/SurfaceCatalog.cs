@@ -19,6 +19,7 @@ namespace Temperance.Surfaces
 
         private readonly Dictionary<INamedTypeSymbol, SurfaceDefinition> byType;
         private readonly Dictionary<INamedTypeSymbol, (SurfaceDefinition Surface, HashSet<string> Methods)> sendMethods;
+        private readonly HashSet<string> sendMethodNames;
         private readonly List<(AdapterDefinition Adapter, INamedTypeSymbol Declaring, INamedTypeSymbol? Receiver)> adapters =
             new List<(AdapterDefinition, INamedTypeSymbol, INamedTypeSymbol?)>();
 
@@ -27,6 +28,7 @@ namespace Temperance.Surfaces
         {
             this.byType = byType;
             this.sendMethods = sendMethods;
+            sendMethodNames = new HashSet<string>(sendMethods.Values.SelectMany(s => s.Item2), System.StringComparer.Ordinal);
             JsonObjectType = jsonObject;
             DictionaryType = dictionary;
         }
@@ -133,9 +135,13 @@ namespace Temperance.Surfaces
         }
 
         /// <summary>The surface of a type or of its nearest base type that is one (user subclasses, Azure SK settings).</summary>
+        /// <remarks>
+        /// The filter asks this for most types of ordinary code. Special types (string, int, object, ValueType, Enum …) are
+        /// never surfaces and end the walk without a lookup, so <c>string</c> costs nothing and <c>List&lt;string&gt;</c> one.
+        /// </remarks>
         public SurfaceDefinition? Find(ITypeSymbol? type)
         {
-            for (var current = type as INamedTypeSymbol; current != null; current = current.BaseType)
+            for (var current = type as INamedTypeSymbol; current != null && current.SpecialType == SpecialType.None; current = current.BaseType)
             {
                 if (byType.TryGetValue(current.OriginalDefinition, out var definition))
                 {
@@ -152,7 +158,8 @@ namespace Temperance.Surfaces
         /// </summary>
         public SurfaceDefinition? SurfaceSentBy(IMethodSymbol method)
         {
-            if (method.ContainingType == null || !sendMethods.TryGetValue(method.ContainingType.OriginalDefinition, out var sent)
+            // The name first: the filter asks this for every call of ordinary code, and ContainingType is not a field read.
+            if (!sendMethodNames.Contains(method.Name) || method.ContainingType == null || !sendMethods.TryGetValue(method.ContainingType.OriginalDefinition, out var sent)
                 || !sent.Methods.Contains(method.Name))
             {
                 return null;
