@@ -49,7 +49,7 @@ Console.WriteLine();
 Console.WriteLine($"{"project",-7} {"compile ms",10} {"telemetry ms",13} {"telemetry/compile",18} {"NetAnalyzers median ms",23} {"telemetry/median",17} {"floor ms",9} {"floor/compile",14} {"above floor/compile",20} {"diagnostics",12}");
 foreach (var r in new[] { dense, quiet, none })
 {
-    Console.WriteLine($"{r.Name,-7} {r.CompileMs,10:N0} {r.TemperanceMs,13:N1} {r.TemperanceMs / r.CompileMs * 100,17:N2}% {r.MedianMs,23:N1} {r.TemperanceMs / Math.Max(r.MedianMs, 0.001),17:N2} {r.FloorMs,9:N1} {r.FloorMs / r.CompileMs * 100,13:N2}% {(r.TemperanceMs - r.FloorMs) / r.CompileMs * 100,19:N2}% {r.Diagnostics,12:N0}");
+    Console.WriteLine($"{r.Name,-7} {r.CompileMs,10:N0} {r.TemperanceMs,13:N1} {r.TemperanceMs / r.CompileMs * 100,17:N2}% {r.MedianMs,23:N1} {r.TemperanceMs / Math.Max(r.MedianMs, 0.001),17:N2} {r.FloorMs,9:N1} {r.FloorMs / r.CompileMs * 100,13:N2}% {(r.TemperanceActions == 0 ? "n/a (no actions)" : $"{(r.TemperanceMs - r.FloorMs) / r.CompileMs * 100:N2}%"),20} {r.Diagnostics,12:N0}");
 }
 
 Console.WriteLine();
@@ -155,7 +155,8 @@ static async Task<Result> Measure(string name, List<string> sources, List<Metada
     }
 
     var floorTime = Median(telemetry[floor]);
-    Console.WriteLine($"{name}: reporting floor (Temperance's shape, no work of its own, the same findings) {floorTime:N1} ms; Temperance above it {ourTime - floorTime:N1} ms");
+    Console.WriteLine($"{name}: reporting floor (Temperance's shape, no work of its own, the same findings) {floorTime:N1} ms"
+        + (actions == 0 ? "; Temperance registered no actions" : $"; Temperance above it {ourTime - floorTime:N1} ms"));
     var ours = diagnostics.Count(d => d.Id.StartsWith("SAMP", StringComparison.Ordinal));
     Console.WriteLine($"{name}: {trees.Count} files, {sources.Sum(s => s.Split('\n').Length):N0} lines, {ours:N0} Temperance diagnostics, {diagnostics.Length:N0} in all;"
         + $" analyzers wall {Median(baseline):N0} ms without Temperance, {Median(with):N0} ms with; GC pauses {Median(gcShare) * 100:N0}% of analysis wall time");
