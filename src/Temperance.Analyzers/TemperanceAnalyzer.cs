@@ -128,8 +128,9 @@ namespace Temperance
                 {
                     foreach (var finding in rule(request, state.Policy))
                     {
-                        // Clone and with inherit writes; a location is judged once.
-                        if (reported.Add((finding.Descriptor.Id, finding.Location)))
+                        // Clone and with inherit writes; a location is judged once. Code under #line hidden is generated
+                        // (Razor, T4) and silent, as the driver would have made it (GeneratedCode.cs says why we decide).
+                        if (!GeneratedCode.IsHidden(finding.Location) && reported.Add((finding.Descriptor.Id, finding.Location)))
                         {
                             report(finding.ToDiagnostic());
                         }

@@ -41,6 +41,10 @@ namespace Temperance.Extraction
         public bool Contains(SyntaxTree tree, ISymbol? owner, CancellationToken cancellationToken) =>
             trees.GetOrAdd(tree, t => IsGeneratedTree(t, cancellationToken)) || HasGeneratedCodeAttribute(owner);
 
+        /// <summary>A location inside a <c>#line hidden</c> region, which the compiler also treats as generated.</summary>
+        public static bool IsHidden(Location location) =>
+            location.SourceTree is { } tree && tree.GetLineVisibility(location.SourceSpan.Start) == LineVisibility.Hidden;
+
         private bool IsGeneratedTree(SyntaxTree tree, CancellationToken cancellationToken)
         {
             // An explicit generated_code = true | false wins over the heuristics, as in the compiler.

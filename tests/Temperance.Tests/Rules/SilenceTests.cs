@@ -147,6 +147,23 @@ public class SilenceTests
     }
 
     [Fact]
+    public async Task LineHiddenRegion_DoesNotTrigger()
+    {
+        // Razor and T4 output marks its own plumbing with #line hidden; what follows #line default is the user's again.
+        await Verify.AnalyzerAsync("""
+            using OpenAI.Chat;
+
+            class Page
+            {
+            #line hidden
+                ChatCompletionOptions A() => new ChatCompletionOptions { Temperature = 5f };
+            #line default
+                ChatCompletionOptions B() => new ChatCompletionOptions { {|SAMP005:Temperature = 5f|} };
+            }
+            """);
+    }
+
+    [Fact]
     public async Task PragmaSuppressed_DoesNotTrigger()
     {
         await Verify.AnalyzerAsync("""
