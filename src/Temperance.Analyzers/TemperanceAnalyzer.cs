@@ -25,7 +25,7 @@ namespace Temperance
         public override void Initialize(AnalysisContext context)
         {
             context.EnableConcurrentExecution();
-            // Generated code is skipped by GeneratedCode below, per block, instead of by the driver per diagnostic (see there why).
+            // Generated code is skipped by GeneratedCode below, per matching block, instead of by the driver per diagnostic (see there why).
             context.ConfigureGeneratedCodeAnalysis(GeneratedCodeAnalysisFlags.Analyze | GeneratedCodeAnalysisFlags.ReportDiagnostics);
             context.RegisterCompilationStartAction(OnCompilationStart);
         }
@@ -63,11 +63,6 @@ namespace Temperance
             // block (the IDE can re-run one member at a time).
             context.RegisterOperationBlockStartAction(start =>
             {
-                if (start.OperationBlocks.Length == 0 || generated.Contains(start.OperationBlocks[0].Syntax.SyntaxTree, start.OwningSymbol, start.CancellationToken))
-                {
-                    return;
-                }
-
                 BlockCollector? collector = null;
                 start.RegisterOperationAction(
                     c =>
@@ -88,7 +83,14 @@ namespace Temperance
                         return;
                     }
 
+                    // Generated code is asked about only here, for the few blocks where something matched: most blocks never
+                    // have a candidate, and the filter alone reports nothing.
                     var tree = block.OperationBlocks[0].Syntax.SyntaxTree;
+                    if (generated.Contains(tree, block.OwningSymbol, block.CancellationToken))
+                    {
+                        return;
+                    }
+
                     var state = states.GetOrAdd(tree, t => new TreeState(new TemperancePolicy(options.GetOptions(t), options.GlobalOptions)));
                     var owner = OwnerOf(block.OwningSymbol);
                     var callContext = new CallContext(owner, owner.ContainingType, tests.IsTestContext(owner, state.Policy.TestAttributes));

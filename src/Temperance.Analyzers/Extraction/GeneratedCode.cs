@@ -10,7 +10,7 @@ using Temperance.Surfaces;
 namespace Temperance.Extraction
 {
     /// <summary>
-    /// Decides, once per tree and per block owner, whether code is generated, with the compiler's own criteria: the
+    /// Decides, once per tree and per owner of a block that matched, whether code is generated, with the compiler's own criteria: the
     /// <c>generated_code</c> option, generated file names, an <c>&lt;auto-generated&gt;</c> header, and
     /// <c>[GeneratedCode]</c> on the member or a containing type.
     /// <para>
@@ -38,8 +38,16 @@ namespace Temperance.Extraction
         }
 
         /// <summary>True when a block of <paramref name="owner"/> in <paramref name="tree"/> is generated code.</summary>
-        public bool Contains(SyntaxTree tree, ISymbol? owner, CancellationToken cancellationToken) =>
-            trees.GetOrAdd(tree, t => IsGeneratedTree(t, cancellationToken)) || HasGeneratedCodeAttribute(owner);
+        public bool Contains(SyntaxTree tree, ISymbol? owner, CancellationToken cancellationToken)
+        {
+            // TryGetValue first: the usual hit allocates no closure.
+            if (!trees.TryGetValue(tree, out var generatedTree))
+            {
+                generatedTree = trees.GetOrAdd(tree, IsGeneratedTree(tree, cancellationToken));
+            }
+
+            return generatedTree || HasGeneratedCodeAttribute(owner);
+        }
 
         /// <summary>A location inside a <c>#line hidden</c> region, which the compiler also treats as generated.</summary>
         public static bool IsHidden(Location location) =>
@@ -47,7 +55,8 @@ namespace Temperance.Extraction
 
         private bool IsGeneratedTree(SyntaxTree tree, CancellationToken cancellationToken)
         {
-            // An explicit generated_code = true | false wins over the heuristics, as in the compiler.
+            // An explicit generated_code = true | false wins over the heuristics, as in the compiler. The compiler hands it
+            // over as tree options; hosts that pass only analyzer options (the inventory tool, test harnesses) as a key.
             var kind = treeOptions?.IsGenerated(tree, cancellationToken) ?? GeneratedKind.Unknown;
             if (kind == GeneratedKind.Unknown && options.GetOptions(tree).TryGetValue("generated_code", out var value) && bool.TryParse(value, out var flag))
             {
