@@ -51,9 +51,9 @@ namespace Temperance
                 return; // no LLM SDK, no declared surface, raw JSON not asked for: register nothing, zero cost
             }
 
-            var tests = TestFrameworks.Resolve(context.Compilation);
-            var states = new ConcurrentDictionary<SyntaxTree, TreeState>();
             var options = context.Options.AnalyzerConfigOptionsProvider;
+            var tests = TestFrameworks.Resolve(context.Compilation, options.GlobalOptions);
+            var states = new ConcurrentDictionary<SyntaxTree, TreeState>();
             var generated = new GeneratedCode(context.Compilation, options);
 
             // Per block: one operation action over the few kinds that create, change or send options, behind a filter that
@@ -93,7 +93,7 @@ namespace Temperance
 
                     var state = states.GetOrAdd(tree, t => new TreeState(new TemperancePolicy(options.GetOptions(t), options.GlobalOptions)));
                     var owner = OwnerOf(block.OwningSymbol);
-                    var callContext = new CallContext(owner, owner.ContainingType, tests.IsTestContext(owner, state.Policy.TestAttributes));
+                    var callContext = tests.ContextOf(owner, state.Policy.TestAttributes);
                     var requests = RequestBuilder.Build(catalog, callContext, collector, block.OperationBlocks);
                     if (requests.Count > 0)
                     {
@@ -126,6 +126,11 @@ namespace Temperance
             var reported = new HashSet<(string, Location)>();
             foreach (var request in requests)
             {
+                if (!request.IsJudged)
+                {
+                    continue; // never reaches a model (Request.SilentBecause says why)
+                }
+
                 foreach (var rule in Rules.RuleSet.All)
                 {
                     foreach (var finding in rule(request, state.Policy))

@@ -48,7 +48,7 @@ public static class Inventory
 
         var config = CompilationConfig.Read(compilation, options);
         var catalog = SurfaceCatalog.Resolve(compilation, config.Surfaces, config.RawJson);
-        var tests = TestFrameworks.Resolve(compilation);
+        var tests = TestFrameworks.Resolve(compilation, options.GlobalOptions);
         var generated = new GeneratedCode(compilation, options);
         foreach (var tree in compilation.SyntaxTrees)
         {
@@ -62,7 +62,12 @@ public static class Inventory
                     continue;
                 }
 
-                var context = new CallContext(owner, owner?.ContainingType, tests.IsTestContext(owner, policy.TestAttributes));
+                if (owner == null)
+                {
+                    continue;
+                }
+
+                var context = tests.ContextOf(owner, policy.TestAttributes);
                 foreach (var request in RequestBuilder.Build(catalog, context, collector, new[] { operation }))
                 {
                     rows.Add(Row(project, request, policy, diagnostics));

@@ -18,7 +18,6 @@ namespace Temperance.Extraction
         private readonly SurfaceCatalog catalog;
         private readonly CallContext context;
         private readonly List<Instance> instances = new List<Instance>();
-        private readonly Dictionary<Request, IInvocationOperation> sends = new Dictionary<Request, IInvocationOperation>();
 
         private readonly IReadOnlyList<IOperation> blocks;
 
@@ -70,21 +69,27 @@ namespace Temperance.Extraction
                 return System.Array.Empty<Request>();
             }
 
-            // In a test: does the model's output reach an exact assertion, and is the client a real one?
+            // Where each request's options go, and what receives them.
+            var reachability = new Reachability(catalog, builder.Operations);
+            var sends = new Dictionary<Request, IOperation>();
+            foreach (var instance in requests)
+            {
+                if (builder.Resolve(instance, reachability) is { } send)
+                {
+                    sends[instance.Request] = send;
+                }
+            }
+
+            // In a test: does the model's output reach an exact assertion?
             if (context.IsTest)
             {
-                var allSends = new HashSet<IOperation>(builder.sends.Values);
-                foreach (var instance in requests)
+                var allSends = new HashSet<IOperation>(sends.Values);
+                foreach (var pair in sends)
                 {
-                    if (builder.sends.TryGetValue(instance.Request, out var send))
+                    if (OutputFlow.FindExactAssertion(pair.Value, builder.Operations, allSends) is { } assertion)
                     {
-                        if (OutputFlow.FindExactAssertion(send, builder.Operations, allSends) is { } assertion)
-                        {
-                            instance.Request.ExactAssertion = assertion.Description;
-                            instance.Request.ExactAssertionLocation = assertion.Location;
-                        }
-
-                        instance.Request.ClientIsTestDouble = builder.IsTestDouble(Receiver(send), 0);
+                        pair.Key.ExactAssertion = assertion.Description;
+                        pair.Key.ExactAssertionLocation = assertion.Location;
                     }
                 }
             }
@@ -105,6 +110,85 @@ namespace Temperance.Extraction
 
             return requests.Select(i => i.Request).ToList();
         }
+
+        /// <summary>
+        /// Fills in how far a request's options get (<see cref="Request.Reach"/>), the send, the client's model id, adapter
+        /// and whether it is a test double. Returns the send, when there is one.
+        /// </summary>
+        private IOperation? Resolve(Instance instance, Reachability reachability)
+        {
+            var request = instance.Request;
+            IOperation? send;
+            IOperation? innerSend = null;
+            if (instance.ImplicitSend != null)
+            {
+                send = instance.ImplicitSend;
+                request.Reach = Reach.Sent;
+            }
+            else if (instance.IsPayload && !context.InTestCode)
+            {
+                request.Reach = Reach.Sent; // serialised or posted in this block (checked when it was collected)
+                return null;
+            }
+            else
+            {
+                var result = reachability.Of(instance.Creation, instance.Holder, instance.Creation?.Syntax.SpanStart ?? 0);
+                request.Reach = result.Reach;
+                request.ReachNote = result.Reach == Reach.Sent ? (result.Through == null ? null : $"sent through '{Reachability.SendName(result.Send!)}' to '{result.Through}'") : result.Escape;
+                send = result.Send;
+                innerSend = result.InnerSend;
+                if (send == null)
+                {
+                    return null;
+                }
+            }
+
+            request.SendingCall = send switch
+            {
+                IInvocationOperation invocation => invocation.TargetMethod,
+                IObjectCreationOperation creation => creation.Constructor,
+                _ => null,
+            };
+            request.SendingCallLocation = send.Syntax.GetLocation();
+            var client = ClientOf(send);
+            request.ClientModelId = ClientModel(client, 0);
+            if (ClientAdapter(client, 0) is { } adapter)
+            {
+                request.Adapter = adapter.Name;
+                request.AdapterDisplay = adapter.Display;
+            }
+
+            // GetResponseAsync<Invoice>(…): a typed structured-output send (only a send: a serialiser's Write<T> is not one).
+            if (request.SendingCall is { IsGenericMethod: true, TypeArguments.Length: 1 } generic && innerSend == null
+                && request.ResponseShape is ResponseShape.Unspecified or ResponseShape.Text)
+            {
+                request.ResponseShape = ResponseShape.Structured;
+                request.ResponseShapeEvidence = $"{generic.Name}<{generic.TypeArguments[0].Name}>";
+            }
+
+            request.TestDouble = new TestDoubles(Operations, context.InTestCode).Describe(client);
+            if (request.TestDouble == null && innerSend != null)
+            {
+                // Sent through a helper of this file: the helper's own client decides.
+                var root = innerSend;
+                while (root.Parent != null)
+                {
+                    root = root.Parent;
+                }
+
+                request.TestDouble = new TestDoubles(root.DescendantsAndSelf().ToList(), context.InTestCode).Describe(ClientOf(innerSend));
+            }
+
+            return send;
+        }
+
+        /// <summary>The client a send goes through: the receiver, or for a constructor (an agent, a generator) its first argument.</summary>
+        private static IOperation? ClientOf(IOperation send) => send switch
+        {
+            IInvocationOperation invocation => Receiver(invocation),
+            IObjectCreationOperation { Arguments.Length: > 0 } creation => creation.Arguments[0].Value,
+            _ => null,
+        };
 
         private void AddCreation(IOperation creation)
         {
@@ -232,23 +316,6 @@ namespace Temperance.Extraction
                     continue;
                 }
 
-                if (instance.Request.SendingCall == null && !ReferenceEquals(operand, invocation.Instance))
-                {
-                    instance.Request.SendingCall = method;
-                    instance.Request.SendingCallLocation = invocation.Syntax.GetLocation();
-                    instance.Request.ClientModelId = ClientModel(Receiver(invocation), 0);
-                    sends[instance.Request] = invocation;
-                    if (ClientAdapter(Receiver(invocation), 0) is { } adapter)
-                    {
-                        instance.Request.Adapter = adapter.Name;
-                        instance.Request.AdapterDisplay = adapter.Display;
-                    }
-                    if (method.IsGenericMethod && method.TypeArguments.Length == 1 && instance.Request.ResponseShape is ResponseShape.Unspecified or ResponseShape.Text)
-                    {
-                        instance.Request.ResponseShape = ResponseShape.Structured;
-                        instance.Request.ResponseShapeEvidence = $"{method.Name}<{method.TypeArguments[0].Name}>";
-                    }
-                }
             }
         }
 
@@ -274,8 +341,9 @@ namespace Temperance.Extraction
                 }
             }
 
+            // Only a declared send is a request; a factory or mapper with an omitted options parameter is not.
             surface ??= catalog.SurfaceSentBy(invocation.TargetMethod);
-            if (surface == null)
+            if (surface == null || !catalog.IsSend(invocation.TargetMethod) || Reachability.IsExpectation(invocation))
             {
                 return;
             }
@@ -302,16 +370,8 @@ namespace Temperance.Extraction
                     }
                 }
             }
-            request.ClientModelId = ClientModel(Receiver(invocation), 0);
             request.SeedAvailable = SeedAvailable(surface, null);
-            sends[request] = invocation;
-            if (invocation.TargetMethod.IsGenericMethod && invocation.TargetMethod.TypeArguments.Length == 1)
-            {
-                request.ResponseShape = ResponseShape.Structured;
-                request.ResponseShapeEvidence = $"{invocation.TargetMethod.Name}<{invocation.TargetMethod.TypeArguments[0].Name}>";
-            }
-
-            Track(new Instance(request, invocation, null));
+            Track(new Instance(request, invocation, null) { ImplicitSend = invocation });
         }
 
         /// <summary>The client a call goes through: the instance, or the <c>this</c> argument of an extension method.</summary>
@@ -390,29 +450,6 @@ namespace Temperance.Extraction
             return catalog.AdapterCreatedBy(operation);
         }
 
-        /// <summary>A client whose concrete type is declared in the user's own code (a fake IChatClient): sampling means nothing there.</summary>
-        private bool IsTestDouble(IOperation? client, int depth)
-        {
-            if (client == null || depth > 4)
-            {
-                return false;
-            }
-
-            var operation = client;
-            while (operation is IConversionOperation conversion)
-            {
-                operation = conversion.Operand;
-            }
-
-            if (operation is ILocalReferenceOperation local && LocalInitializer(local.Local) is { } initializer)
-            {
-                return IsTestDouble(initializer, depth + 1);
-            }
-
-            var type = operation is IObjectCreationOperation creation ? creation.Type : operation.Type;
-            return type is INamedTypeSymbol named && named.TypeKind == TypeKind.Class && named.Locations.Any(l => l.IsInSource);
-        }
-
         private IOperation? LocalInitializer(ILocalSymbol local)
         {
             if (localInitializers == null)
@@ -434,28 +471,25 @@ namespace Temperance.Extraction
         private Dictionary<ILocalSymbol, IOperation?>? localInitializers;
 
         /// <summary>
-        /// A client held in a field or property initialised elsewhere in the type: read the model from syntax (no
-        /// semantic model in the analyzer). A named argument wins; else the first string literal of GetChatClient(…) or
+        /// A client held in a field or property initialised elsewhere in the type (its initializer, a constructor, a setup
+        /// method): read the model from syntax (no semantic model for other members in the analyzer). A named argument wins; else the first string literal of GetChatClient(…) or
         /// of the creation that is not an address.
         /// </summary>
         private static string? ModelFromSyntax(ISymbol member)
         {
-            if (member.DeclaringSyntaxReferences.Length != 1)
+            foreach (var value in MemberValues.Of(member))
             {
-                return null;
+                if (ModelFromSyntax(value) is { } model)
+                {
+                    return model;
+                }
             }
 
-            var initializer = member.DeclaringSyntaxReferences[0].GetSyntax() switch
-            {
-                Microsoft.CodeAnalysis.CSharp.Syntax.VariableDeclaratorSyntax v => v.Initializer?.Value,
-                Microsoft.CodeAnalysis.CSharp.Syntax.PropertyDeclarationSyntax p => p.Initializer?.Value,
-                _ => null,
-            };
-            if (initializer == null)
-            {
-                return null;
-            }
+            return null;
+        }
 
+        private static string? ModelFromSyntax(SyntaxNode initializer)
+        {
             string? fallback = null;
             foreach (var argument in initializer.DescendantNodesAndSelf().OfType<Microsoft.CodeAnalysis.CSharp.Syntax.ArgumentSyntax>())
             {
@@ -1024,6 +1058,8 @@ namespace Temperance.Extraction
             /// <summary>A key only a model request has (messages, prompt, max_tokens …), beside model and one sampling key.</summary>
             public bool PayloadHasRequestShape { get; set; }
             public bool PayloadSent { get; set; }
+            /// <summary>For a request made by a send that passes no options: that send.</summary>
+            public IOperation? ImplicitSend { get; set; }
         }
     }
 }

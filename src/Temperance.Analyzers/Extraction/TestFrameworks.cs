@@ -23,12 +23,34 @@ namespace Temperance.Extraction
         private readonly System.Collections.Concurrent.ConcurrentDictionary<(INamedTypeSymbol, string), HashSet<string>> calledFromTests =
             new System.Collections.Concurrent.ConcurrentDictionary<(INamedTypeSymbol, string), HashSet<string>>(SymbolKeyComparer<INamedTypeSymbol, string>.Instance);
 
-        private TestFrameworks(HashSet<INamedTypeSymbol> attributes)
+        private readonly bool testProject;
+        private readonly System.Collections.Concurrent.ConcurrentDictionary<(INamedTypeSymbol, string), bool> testClasses =
+            new System.Collections.Concurrent.ConcurrentDictionary<(INamedTypeSymbol, string), bool>(SymbolKeyComparer<INamedTypeSymbol, string>.Instance);
+
+        private TestFrameworks(HashSet<INamedTypeSymbol> attributes, bool testProject)
         {
             this.attributes = attributes;
+            this.testProject = testProject;
         }
 
-        public static TestFrameworks Resolve(Compilation compilation)
+        /// <summary>
+        /// A test project: MSBuild's <c>IsTestProject</c> (set by Microsoft.NET.Test.Sdk, made visible by the package), or an
+        /// assembly named like one (<c>*.Tests</c>, <c>*.Test</c>, <c>*.Specs</c>) that references a test framework.
+        /// </summary>
+        private static bool IsTestProject(Compilation compilation, Microsoft.CodeAnalysis.Diagnostics.AnalyzerConfigOptions? global, bool hasFramework)
+        {
+            if (global != null && global.TryGetValue("build_property.IsTestProject", out var value) && !string.IsNullOrWhiteSpace(value))
+            {
+                return string.Equals(value.Trim(), "true", System.StringComparison.OrdinalIgnoreCase);
+            }
+
+            var name = compilation.AssemblyName ?? string.Empty;
+            return hasFramework && (name.EndsWith(".Tests", System.StringComparison.Ordinal) || name.EndsWith(".Test", System.StringComparison.Ordinal)
+                || name.EndsWith(".UnitTests", System.StringComparison.Ordinal) || name.EndsWith(".IntegrationTests", System.StringComparison.Ordinal)
+                || name.EndsWith(".Specs", System.StringComparison.Ordinal));
+        }
+
+        public static TestFrameworks Resolve(Compilation compilation, Microsoft.CodeAnalysis.Diagnostics.AnalyzerConfigOptions? global = null)
         {
             var found = new HashSet<INamedTypeSymbol>(SymbolEqualityComparer.Default);
             foreach (var name in AttributeNames)
@@ -39,7 +61,35 @@ namespace Temperance.Extraction
                 }
             }
 
-            return new TestFrameworks(found);
+            return new TestFrameworks(found, IsTestProject(compilation, global, found.Count > 0));
+        }
+
+        /// <summary>Where a block's requests are built: whether it is a test (or a test's helper), and whether it is test code at all.</summary>
+        public Model.CallContext ContextOf(ISymbol owner, IReadOnlyCollection<string> extraAttributes)
+        {
+            var isTest = IsTestContext(owner, extraAttributes);
+            var inTestCode = isTest || testProject || IsTestClass(owner.ContainingType, extraAttributes);
+            return new Model.CallContext(owner, owner.ContainingType, isTest, inTestCode);
+        }
+
+        /// <summary>A class (or one containing it) that declares test methods: its fields, fixtures and helpers are test code.</summary>
+        private bool IsTestClass(INamedTypeSymbol? type, IReadOnlyCollection<string> extraAttributes)
+        {
+            if (attributes.Count == 0 && extraAttributes.Count == 0)
+            {
+                return false;
+            }
+
+            for (var current = type; current != null; current = current.ContainingType)
+            {
+                var key = (current, extraAttributes.Count == 0 ? string.Empty : string.Join(",", extraAttributes));
+                if (testClasses.GetOrAdd(key, k => k.Item1.GetMembers().Any(m => IsTest(m, extraAttributes))))
+                {
+                    return true;
+                }
+            }
+
+            return false;
         }
 
         /// <summary>True for a method carrying a test attribute (or one derived from it, such as Theory from Fact).</summary>

@@ -70,8 +70,24 @@ namespace Temperance.Model
         /// <summary>In a test: the exact assertion the model's output reaches ("Assert.Equal"), and where.</summary>
         public string? ExactAssertion { get; set; }
         public Location? ExactAssertionLocation { get; set; }
-        /// <summary>The client is a test double declared in the user's own code: sampling settings mean nothing.</summary>
-        public bool ClientIsTestDouble { get; set; }
+        /// <summary>How far the options get (see <see cref="Model.Reach"/>), and in words why, for the inventory.</summary>
+        public Reach Reach { get; set; } = Reach.Sent;
+        public string? ReachNote { get; set; }
+        /// <summary>The double the request is sent to, when it is one ("a Moq double (Mock)"): sampling means nothing there.</summary>
+        public string? TestDouble { get; set; }
+
+        /// <summary>
+        /// Judged only when the options reach a model: sent to a client that is not a double, or (outside test code) kept
+        /// or handed on where they are sent later. Rules never see the others.
+        /// </summary>
+        public bool IsJudged => TestDouble == null && (Reach == Reach.Sent || (Reach == Reach.Escapes && !Context.InTestCode));
+
+        /// <summary>Why a request is not judged, for the inventory; null when it is.</summary>
+        public string? SilentBecause =>
+            TestDouble != null ? "sent to a test double: " + TestDouble
+            : Reach == Reach.NotSent ? "never sent to a model" + (ReachNote == null ? string.Empty : $" ({ReachNote})")
+            : Reach == Reach.Escapes && Context.InTestCode ? $"test code that never sends it ({ReachNote})"
+            : null;
 
         /// <summary>Task hints gathered by extraction: identifiers, prompt text, annotations. Policy turns them into a task.</summary>
         public List<TaskSignal> TaskSignals { get; } = new List<TaskSignal>();

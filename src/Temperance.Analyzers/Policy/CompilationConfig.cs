@@ -170,7 +170,7 @@ namespace Temperance.Policy
                     return;
                 }
 
-                if (surface.SentBy != null && surface.SentBy != client.ToDisplayString())
+                if (surface.SendSites.Count > 0 && surface.SendSites[0].ClientType != client.ToDisplayString())
                 {
                     Problems.Add(new ConfigProblem(key, list, "methods of a single client type"));
                     return;

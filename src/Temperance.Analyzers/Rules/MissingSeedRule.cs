@@ -13,7 +13,7 @@ namespace Temperance.Rules
         public static IEnumerable<Finding> Evaluate(Request request, TemperancePolicy policy)
         {
             var mode = policy.RequireSeed;
-            if (mode == "never" || !request.SeedAvailable || request.KindOf(Setting.Seed, out _) != ValueKind.Unset || request.ClientIsTestDouble)
+            if (mode == "never" || !request.SeedAvailable || request.KindOf(Setting.Seed, out _) != ValueKind.Unset)
             {
                 yield break;
             }

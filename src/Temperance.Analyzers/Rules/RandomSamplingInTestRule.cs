@@ -13,7 +13,7 @@ namespace Temperance.Rules
     {
         public static IEnumerable<Finding> Evaluate(Request request, TemperancePolicy policy)
         {
-            if (!request.Context.IsTest || request.ExactAssertion == null || request.ClientIsTestDouble || request.SendingCallLocation == null)
+            if (!request.Context.IsTest || request.ExactAssertion == null || request.SendingCallLocation == null)
             {
                 yield break;
             }

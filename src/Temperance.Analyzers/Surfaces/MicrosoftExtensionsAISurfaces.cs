@@ -24,11 +24,18 @@ namespace Temperance.Surfaces
                 .Key("min_p", Setting.MinP)
                 .Key("seed", Setting.Seed)
                 .Key("repeat_penalty", Setting.RepetitionPenalty)
-                .Key("N", Setting.Candidates),
+                .Key("N", Setting.Candidates)
+                .Sends("Microsoft.Extensions.AI.IChatClient", "GetResponseAsync", "GetStreamingResponseAsync")
+                .Sends("Microsoft.Extensions.AI.ChatClientExtensions", "GetResponseAsync", "GetStreamingResponseAsync")
+                .Sends("Microsoft.Extensions.AI.ChatClientStructuredOutputExtensions", "GetResponseAsync"),
+            // Agents: per-run options go with a run; agent options are stored in the agent, so creating it is the send.
             new SurfaceDefinition("Microsoft.Agents.AI.ChatClientAgentRunOptions", Providers.Generic)
-                .Nested("ChatOptions"),
+                .Nested("ChatOptions")
+                .Sends("Microsoft.Agents.AI.AIAgent", "RunAsync", "RunStreamingAsync"),
             new SurfaceDefinition("Microsoft.Agents.AI.ChatClientAgentOptions", Providers.Generic)
-                .Nested("ChatOptions"),
+                .Nested("ChatOptions")
+                .Sends("Microsoft.Agents.AI.ChatClientAgent", SendSite.Constructor)
+                .Sends("Microsoft.Extensions.AI.ChatClientExtensions", "AsAIAgent"),
         };
     }
 }

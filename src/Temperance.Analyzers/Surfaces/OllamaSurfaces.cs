@@ -12,11 +12,14 @@ namespace Temperance.Surfaces
                 .Map("TopK", Setting.TopK)
                 .Map("MinP", Setting.MinP)
                 .Map("Seed", Setting.Seed)
-                .Map("RepeatPenalty", Setting.RepetitionPenalty),
+                .Map("RepeatPenalty", Setting.RepetitionPenalty)
+                .Sends("OllamaSharp.Chat", "SendAsync", "SendAsAsync"),
             new SurfaceDefinition("OllamaSharp.Models.Chat.ChatRequest", Providers.Ollama) { ModelMember = "Model", ResponseFormatMember = "Format" }
-                .Nested("Options"),
+                .Nested("Options")
+                .Sends("OllamaSharp.IOllamaApiClient", "ChatAsync"),
             new SurfaceDefinition("OllamaSharp.Models.GenerateRequest", Providers.Ollama) { ModelMember = "Model", ResponseFormatMember = "Format" }
-                .Nested("Options"),
+                .Nested("Options")
+                .Sends("OllamaSharp.IOllamaApiClient", "GenerateAsync"),
         };
     }
 }

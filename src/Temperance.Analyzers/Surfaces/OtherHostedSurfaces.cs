@@ -10,15 +10,20 @@ namespace Temperance.Surfaces
             // Azure AI model inference spells top-p NucleusSamplingFactor.
             new SurfaceDefinition("Azure.AI.Inference.ChatCompletionsOptions", Providers.AzureInference) { ModelMember = "Model", ResponseFormatMember = "ResponseFormat" }
                 .OpenAIShape("NucleusSamplingFactor")
-                .Map("Seed", Setting.Seed),
+                .Map("Seed", Setting.Seed)
+                .Sends("Azure.AI.Inference.ChatCompletionsClient", "Complete", "CompleteAsync", "CompleteStreaming", "CompleteStreamingAsync"),
             // Betalgo speaks the OpenAI wire format, including n (candidate count).
             new SurfaceDefinition("Betalgo.Ranul.OpenAI.ObjectModels.RequestModels.ChatCompletionCreateRequest", Providers.OpenAI) { ModelMember = "Model", ResponseFormatMember = "ResponseFormat" }
                 .OpenAIShape()
                 .Map("Seed", Setting.Seed)
-                .Map("N", Setting.Candidates),
+                .Map("N", Setting.Candidates)
+                .Sends("Betalgo.Ranul.OpenAI.Interfaces.IChatCompletionService", "CreateCompletion", "CreateCompletionAsStream")
+                .Sends("Betalgo.Ranul.OpenAI.Interfaces.IChatCompletionServiceExtension", "Create"),
             // Anthropic 13.x has no sampling members (an empty member map); the request is still recognised (model, structured output).
-            new SurfaceDefinition("Anthropic.Models.Messages.MessageCreateParams", Providers.Anthropic) { ModelMember = "Model", ResponseFormatMember = "OutputConfig" },
-            new SurfaceDefinition("Anthropic.Models.Beta.Messages.MessageCreateParams", Providers.Anthropic) { ModelMember = "Model", ResponseFormatMember = "OutputConfig" },
+            new SurfaceDefinition("Anthropic.Models.Messages.MessageCreateParams", Providers.Anthropic) { ModelMember = "Model", ResponseFormatMember = "OutputConfig" }
+                .Sends("Anthropic.Services.IMessageService", "Create", "CreateStreaming"),
+            new SurfaceDefinition("Anthropic.Models.Beta.Messages.MessageCreateParams", Providers.Anthropic) { ModelMember = "Model", ResponseFormatMember = "OutputConfig" }
+                .Sends("Anthropic.Services.Beta.IMessageService", "Create", "CreateStreaming"),
         };
     }
 }

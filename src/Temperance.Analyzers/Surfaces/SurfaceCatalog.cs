@@ -63,11 +63,21 @@ namespace Temperance.Surfaces
             }
 
             var sendMethods = new Dictionary<INamedTypeSymbol, (SurfaceDefinition, HashSet<string>)>(SymbolEqualityComparer.Default);
+            var sendsByType = new Dictionary<string, HashSet<string>>(System.StringComparer.Ordinal);
             foreach (var definition in all)
             {
-                if (definition.SentBy != null && TypeLookup.Find(compilation, definition.SentBy) is { } client)
+                foreach (var site in definition.SendSites)
                 {
-                    sendMethods[client] = (definition, new HashSet<string>(definition.SendMethods, System.StringComparer.Ordinal));
+                    if (!sendsByType.TryGetValue(site.ClientType, out var names))
+                    {
+                        sendsByType[site.ClientType] = names = new HashSet<string>(System.StringComparer.Ordinal);
+                    }
+
+                    names.UnionWith(site.Methods);
+                    if (TypeLookup.Find(compilation, site.ClientType) is { } client && !sendMethods.ContainsKey(client))
+                    {
+                        sendMethods[client] = (definition, new HashSet<string>(site.Methods, System.StringComparer.Ordinal));
+                    }
                 }
             }
 
@@ -79,6 +89,8 @@ namespace Temperance.Surfaces
                 rawJsonOn ? TypeLookup.Find(compilation, RawJsonSurface.PayloadTypes[1]) : null)
             {
                 RawJsonEnabled = rawJsonOn,
+                sendsByTypeName = sendsByType,
+                allSendNames = new HashSet<string>(sendsByType.Values.SelectMany(n => n), System.StringComparer.Ordinal),
             };
             foreach (var adapter in AdapterSurfaces.All)
             {
@@ -171,6 +183,87 @@ namespace Temperance.Surfaces
             }
 
             return sent.Surface;
+        }
+
+        private Dictionary<string, HashSet<string>> sendsByTypeName = new Dictionary<string, HashSet<string>>();
+        private HashSet<string> allSendNames = new HashSet<string>();
+
+        /// <summary>Every method name some declared send has (for reading helpers in other files by syntax).</summary>
+        public IReadOnlyCollection<string> SendMethodNames => allSendNames;
+
+        /// <summary>
+        /// Whether a call (or a constructor) sends a request to a model: a declared send method of a declared client type,
+        /// of a type deriving from it, or of a class implementing a declared client interface. Matched by the type's full
+        /// name, because some extension classes share a name across assemblies.
+        /// </summary>
+        public bool IsSend(IMethodSymbol method)
+        {
+            if (method.ContainingType == null)
+            {
+                return false;
+            }
+
+            var name = method.MethodKind == MethodKind.Constructor ? SendSite.Constructor : method.Name;
+            // Any other method of a declared client type that takes options sends them too (a team's Gateway.Complete).
+            var takesOptions = method.Parameters.Any(p => Find(p.Type) != null);
+            if (!takesOptions && !allSendNames.Contains(name))
+            {
+                return false;
+            }
+
+            for (var type = method.ContainingType; type != null && type.SpecialType == SpecialType.None; type = type.BaseType)
+            {
+                if (Declares(type, name, takesOptions))
+                {
+                    return true;
+                }
+            }
+
+            foreach (var implemented in method.ContainingType.AllInterfaces)
+            {
+                if (Declares(implemented, name, takesOptions))
+                {
+                    return true;
+                }
+            }
+
+            return false;
+        }
+
+        private bool Declares(INamedTypeSymbol type, string method, bool takesOptions) =>
+            sendsByTypeName.TryGetValue(FullName(type.OriginalDefinition), out var methods) && (takesOptions || methods.Contains(method));
+
+        /// <summary><c>Namespace.Outer+Inner`1</c>-style metadata name, as the surfaces declare types.</summary>
+        public static string FullName(INamedTypeSymbol type)
+        {
+            var name = type.MetadataName;
+            for (var outer = type.ContainingType; outer != null; outer = outer.ContainingType)
+            {
+                name = outer.MetadataName + "+" + name;
+            }
+
+            var ns = type.ContainingNamespace;
+            return ns == null || ns.IsGlobalNamespace ? name : ns.ToDisplayString() + "." + name;
+        }
+
+        /// <summary>True when the symbol's namespace is one of <paramref name="namespaces"/> or inside one.</summary>
+        public static bool InNamespace(ISymbol? symbol, string[] namespaces)
+        {
+            var ns = symbol?.ContainingNamespace?.ToDisplayString();
+            if (string.IsNullOrEmpty(ns))
+            {
+                return false;
+            }
+
+            foreach (var candidate in namespaces)
+            {
+                if (ns!.StartsWith(candidate, System.StringComparison.Ordinal) && (ns.Length == candidate.Length || ns[candidate.Length] == '.'))
+                {
+                    return true;
+                }
+            }
+
+            return false;
         }
 
         /// <summary>A string-keyed dictionary or JsonObject that could be a hand-built payload.</summary>

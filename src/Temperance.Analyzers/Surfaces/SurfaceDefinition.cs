@@ -40,9 +40,12 @@ namespace Temperance.Surfaces
         public string? KeyedMethod { get; set; }
         /// <summary>A method whose call fixes the response shape (<c>SetGuidance</c>).</summary>
         public string? ShapeMethod { get; set; }
-        /// <summary>The client type whose <see cref="SendMethods"/> send this surface's requests even with no options passed.</summary>
-        public string? SentBy { get; set; }
-        public List<string> SendMethods { get; } = new List<string>();
+        /// <summary>
+        /// The calls that send this surface's requests to a model: a client type (or extension class) and method names,
+        /// <c>.ctor</c> for a constructor. Options that reach none of them (directly, through a carrier object or the
+        /// project's own helpers) never reach a model.
+        /// </summary>
+        public List<SendSite> SendSites { get; } = new List<SendSite>();
 
         public SurfaceDefinition Map(string member, Setting setting)
         {
@@ -58,15 +61,7 @@ namespace Temperance.Surfaces
 
         public SurfaceDefinition Sends(string clientType, params string[] methods)
         {
-            SentBy = clientType;
-            foreach (var method in methods)
-            {
-                if (!SendMethods.Contains(method))
-                {
-                    SendMethods.Add(method);
-                }
-            }
-
+            SendSites.Add(new SendSite(clientType, methods));
             return this;
         }
 
@@ -93,6 +88,21 @@ namespace Temperance.Surfaces
             .Map(topPMember, Setting.TopP)
             .Map("FrequencyPenalty", Setting.FrequencyPenalty)
             .Map("PresencePenalty", Setting.PresencePenalty);
+    }
+
+    /// <summary>A client type (metadata name) and the names of its methods that send a request.</summary>
+    internal sealed class SendSite
+    {
+        public const string Constructor = ".ctor";
+
+        public SendSite(string clientType, IReadOnlyList<string> methods)
+        {
+            ClientType = clientType;
+            Methods = methods;
+        }
+
+        public string ClientType { get; }
+        public IReadOnlyList<string> Methods { get; }
     }
 
     /// <summary>Provider keys of the rules table.</summary>

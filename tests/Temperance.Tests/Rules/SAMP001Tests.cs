@@ -172,6 +172,7 @@ public class SAMP001Tests
                     var p = new GeneratorParams(model);
                     p.SetGuidance("json_schema", "{}");
                     {|SAMP001:p.SetSearchOption("temperature", 0.9)|};
+                    using var generator = new Generator(model, p);
                 }
             }
             """);

@@ -47,6 +47,7 @@ public class SAMP006Tests
                     p.SetSearchOption("do_sample", false);
                     {|SAMP006:p.SetSearchOption("temperature", 0.6)|};
                     {|SAMP006:p.SetSearchOption("top_k", 30)|};
+                    using var generator = new Generator(model, p);
                 }
             }
             """);
@@ -81,6 +82,7 @@ public class SAMP006Tests
                     p.SetSearchOption("do_sample", false);
                     // sampling knobs below are ignored
                     {|SAMP006:p.SetSearchOption("top_p", 0.9)|};
+                    using var generator = new Generator(model, p);
                 }
             }
             """, """
@@ -93,6 +95,7 @@ public class SAMP006Tests
                     var p = new GeneratorParams(model);
                     p.SetSearchOption("do_sample", false);
                     // sampling knobs below are ignored
+                    using var generator = new Generator(model, p);
                 }
             }
             """);

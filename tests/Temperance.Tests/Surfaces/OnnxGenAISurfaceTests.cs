@@ -20,6 +20,7 @@ public class OnnxGenAISurfaceTests
                     {|SAMP009:generatorParams.SetSearchOption("temperature", 2.0)|};
                     {|SAMP005:generatorParams.SetSearchOption("top_p", 1.5)|};
                     generatorParams.SetSearchOption("max_length", 2048);
+                    using var generator = new Generator(model, generatorParams);
                 }
             }
             """);
