@@ -21,6 +21,7 @@ public static class TestReferences
         "xunit.assert", "xunit.core", "xunit.abstractions",
         "nunit.framework", "nunit.framework.legacy", "MSTest.TestFramework", "Microsoft.VisualStudio.TestPlatform.TestFramework",
         "AwesomeAssertions", "FluentAssertions", "Shouldly", "Snapshooter", "Snapshooter.Xunit",
+        "Moq", "Castle.Core", "NSubstitute", "FakeItEasy",
     };
 
     public static readonly ImmutableArray<MetadataReference> Sdks = LoadSdks();
