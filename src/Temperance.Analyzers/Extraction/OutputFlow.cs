@@ -2,6 +2,7 @@ using System.Collections.Generic;
 using System.Linq;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
+using Temperance.Surfaces;
 
 namespace Temperance.Extraction
 {
@@ -24,6 +25,12 @@ namespace Temperance.Extraction
             foreach (var other in allSends.Where(s => !ReferenceEquals(s, send)))
             {
                 Spread(other, otherOutputs);
+            }
+
+            // Arguments the model chose for a tool call, kept in a captured local: model output as much as the reply's text.
+            foreach (var local in ToolArgumentLocals(operations))
+            {
+                tainted.Add(local);
             }
 
             for (var pass = 0; pass < MaxPasses; pass++)
@@ -75,6 +82,10 @@ namespace Temperance.Extraction
             {
                 switch (parent)
                 {
+                    // response.Messages[0].Role, response.Usage …: filled in by the provider, not sampled.
+                    case IPropertyReferenceOperation { Instance: { } read } metadata when ReferenceEquals(read, current)
+                        && TestingSurfaces.ResponseMetadataMembers.Contains(metadata.Property.Name):
+                        return;
                     case IAwaitOperation:
                     case IConversionOperation:
                     case IParenthesizedOperation:
@@ -121,18 +132,71 @@ namespace Temperance.Extraction
         {
             foreach (var operation in compared.DescendantsAndSelf())
             {
-                if (send != null && ReferenceEquals(operation, send))
-                {
-                    return true;
-                }
-
-                if (operation is ILocalReferenceOperation local && tainted.Contains(local.Local))
+                if (((send != null && ReferenceEquals(operation, send)) || (operation is ILocalReferenceOperation local && tainted.Contains(local.Local)))
+                    && !ReadsMetadata(operation, compared))
                 {
                     return true;
                 }
             }
 
             return false;
+        }
+
+        /// <summary>Whether the value compared is a metadata member of the output (its role, usage, id …), not its content.</summary>
+        private static bool ReadsMetadata(IOperation output, IOperation compared)
+        {
+            for (var current = output; current != null && !ReferenceEquals(current, compared.Parent); current = current.Parent)
+            {
+                if (current is IPropertyReferenceOperation property && TestingSurfaces.ResponseMetadataMembers.Contains(property.Property.Name))
+                {
+                    return true;
+                }
+            }
+
+            return false;
+        }
+
+        /// <summary>
+        /// Locals assigned, inside a delegate handed to a tool factory (<c>AIFunctionFactory.Create</c>), from that delegate's
+        /// parameters: the model chose those values.
+        /// </summary>
+        private static IEnumerable<ILocalSymbol> ToolArgumentLocals(IReadOnlyList<IOperation> operations)
+        {
+            foreach (var lambda in operations.OfType<IAnonymousFunctionOperation>())
+            {
+                if (!IsToolDelegate(lambda))
+                {
+                    continue;
+                }
+
+                foreach (var assignment in lambda.Body.DescendantsAndSelf().OfType<ISimpleAssignmentOperation>())
+                {
+                    if (assignment.Target is ILocalReferenceOperation captured
+                        && !SymbolEqualityComparer.Default.Equals(captured.Local.ContainingSymbol, lambda.Symbol)
+                        && assignment.Value.DescendantsAndSelf().OfType<IParameterReferenceOperation>()
+                            .Any(p => SymbolEqualityComparer.Default.Equals(p.Parameter.ContainingSymbol, lambda.Symbol)))
+                    {
+                        yield return captured.Local;
+                    }
+                }
+            }
+        }
+
+        private static bool IsToolDelegate(IAnonymousFunctionOperation lambda)
+        {
+            var current = lambda.Parent;
+            while (current is IDelegateCreationOperation or IConversionOperation)
+            {
+                current = current.Parent;
+            }
+
+            if (current is not IArgumentOperation { Parent: IInvocationOperation factory })
+            {
+                return false;
+            }
+
+            var type = factory.TargetMethod.ContainingType;
+            return type != null && TestingSurfaces.ToolFactories.Any(t => t.Method == factory.TargetMethod.Name && t.Type == Surfaces.SurfaceCatalog.FullName(type));
         }
 
         private static bool Contains(IOperation compared, IOperation send) =>
@@ -149,6 +213,10 @@ namespace Temperance.Extraction
             public string Description { get; }
             public IEnumerable<IOperation> Compared { get; }
         }
+
+        /// <summary>A property or field read (<c>verdict.IsSafe</c>), not a computed check such as <c>text.Contains("x")</c>.</summary>
+        private static bool IsMemberRead(IOperation value) =>
+            ValueReader.Unwrap(value) is IPropertyReferenceOperation or IFieldReferenceOperation;
 
         private static Assertion? ExactAssertion(IInvocationOperation invocation)
         {
@@ -178,6 +246,28 @@ namespace Temperance.Extraction
                     return new Assertion($"snapshot {method.Name}", arguments.Take(1));
                 case "VerifyXunit" or "VerifyNUnit" or "VerifyMSTest" or "VerifyTests" when method.Name.StartsWith("Verify", System.StringComparison.Ordinal):
                     return new Assertion($"snapshot {method.Name}", arguments.Take(1));
+            }
+
+            // A boolean the model produced (verdict.IsSafe), asserted true or false: as exact as Assert.Equal.
+            var boolean = (ns, type.Name, method.Name) switch
+            {
+                ("Xunit", "Assert", "True" or "False") => $"Assert.{method.Name}",
+                ("Microsoft.VisualStudio.TestTools.UnitTesting", "Assert", "IsTrue" or "IsFalse") => $"Assert.{method.Name}",
+                ("NUnit.Framework" or "NUnit.Framework.Legacy", "Assert" or "ClassicAssert", "IsTrue" or "IsFalse" or "True" or "False") => $"{type.Name}.{method.Name}",
+                ("Shouldly", _, "ShouldBeTrue" or "ShouldBeFalse") => method.Name,
+                _ => null,
+            };
+            if (boolean != null && arguments.Count > 0 && IsMemberRead(arguments[0]))
+            {
+                return new Assertion(boolean, arguments.Take(1));
+            }
+
+            if (method.Name is "BeTrue" or "BeFalse"
+                && invocation.Instance is IInvocationOperation { TargetMethod.Name: "Should" } boolShould
+                && boolShould.TargetMethod.ContainingNamespace?.ToDisplayString() is "FluentAssertions" or "AwesomeAssertions"
+                && (boolShould.Arguments.Length > 0 ? boolShould.Arguments[0].Value : boolShould.Instance) is { } subject && IsMemberRead(subject))
+            {
+                return new Assertion($"Should().{method.Name}", new[] { subject });
             }
 
             // FluentAssertions / AwesomeAssertions: actual.Should().Be(expected)

@@ -104,7 +104,7 @@ namespace Temperance.Extraction
                     instance.Request.TaskSignals.Add(annotation);
                 }
 
-                instance.Request.TaskSignals.AddRange(TaskSignalReader.FromNames(context.Member, instance.Holder));
+                instance.Request.TaskSignals.AddRange(TaskSignalReader.FromNames(context.Member, instance.Holder, context.InTestCode));
                 instance.Request.TaskSignals.AddRange(prompts);
             }
 

@@ -20,21 +20,17 @@ namespace Temperance.Extraction
 
         private const int QuoteLength = 48;
 
-        // Identifier words, after splitting on case and digits. Words that are ambiguous in ordinary code
-        // ("query", "chat", "reply") are left out on purpose.
+        // The leading verb of an identifier, after splitting on case and digits. Only verbs that name the task without
+        // doubt count: nouns in names ("label", "tag", "code", "summary") describe data as often as a call, and a name is
+        // weaker evidence than prompt text anyway.
         internal static readonly Dictionary<string, string> NameWords = new Dictionary<string, string>(StringComparer.Ordinal)
         {
-            ["extract"] = "extraction", ["extractor"] = "extraction", ["extraction"] = "extraction", ["parse"] = "extraction", ["parser"] = "extraction",
-            ["classify"] = "classification", ["classifier"] = "classification", ["classification"] = "classification",
-            ["categorize"] = "classification", ["categorise"] = "classification", ["label"] = "classification", ["labeler"] = "classification", ["labeller"] = "classification",
-            ["grade"] = "evaluation", ["grader"] = "evaluation", ["judge"] = "evaluation", ["evaluate"] = "evaluation", ["evaluator"] = "evaluation",
-            ["score"] = "evaluation", ["scorer"] = "evaluation",
-            ["translate"] = "translation", ["translator"] = "translation", ["translation"] = "translation",
-            ["summarize"] = "summarization", ["summarise"] = "summarization", ["summarizer"] = "summarization", ["summariser"] = "summarization",
-            ["summary"] = "summarization", ["summarization"] = "summarization",
-            ["sql"] = "code", ["codegen"] = "code",
-            ["brainstorm"] = "brainstorming", ["ideas"] = "brainstorming", ["ideation"] = "brainstorming",
-            ["poem"] = "creative", ["story"] = "creative", ["slogan"] = "creative", ["tagline"] = "creative", ["lyrics"] = "creative",
+            ["extract"] = "extraction",
+            ["classify"] = "classification", ["categorize"] = "classification", ["categorise"] = "classification",
+            ["grade"] = "evaluation", ["evaluate"] = "evaluation",
+            ["translate"] = "translation",
+            ["summarize"] = "summarization", ["summarise"] = "summarization",
+            ["brainstorm"] = "brainstorming",
         };
 
         // Phrases in prompt text (lower case). "helpful assistant" and the like say nothing about the task.
@@ -80,11 +76,14 @@ namespace Temperance.Extraction
             return null;
         }
 
-        /// <summary>Task words in the names of the containing member, its type and the variable holding the options.</summary>
-        public static IEnumerable<TaskSignal> FromNames(ISymbol? member, ISymbol? holder)
+        /// <summary>
+        /// Leading task verbs in the names of the containing member, its type and the variable holding the options. In test
+        /// code the member and type name describe the test (<c>InvoiceEvaluatorTests</c>), not the call under test.
+        /// </summary>
+        public static IEnumerable<TaskSignal> FromNames(ISymbol? member, ISymbol? holder, bool inTestCode = false)
         {
             var named = new List<(string Name, string What)>();
-            if (member != null)
+            if (member != null && !inTestCode)
             {
                 named.Add((member.Name, member is IMethodSymbol ? "method name" : "member name"));
                 if (member.ContainingType != null)
@@ -108,13 +107,15 @@ namespace Temperance.Extraction
         }
 
         /// <summary>
-        /// The task of the first task word in an identifier. Words split as in PascalCase: "SQLQuery" is "SQL" + "Query",
-        /// digits and underscores separate, and an acronym's last capital starts the next word. Hand-written rather than a
-        /// regular expression because it runs for every request.
+        /// The task named by the leading verb of an identifier (after an optional "Try"): <c>ExtractInvoiceFields</c>,
+        /// <c>TryClassifyTicket</c>. Words split as in PascalCase: "SQLQuery" is "SQL" + "Query", digits and underscores
+        /// separate, and an acronym's last capital starts the next word. Hand-written rather than a regular expression
+        /// because it runs for every request.
         /// </summary>
         internal static string? KindOfName(string name)
         {
             var i = 0;
+            var first = true;
             while (i < name.Length)
             {
                 if (!IsUpper(name[i]) && !IsLower(name[i]))
@@ -145,12 +146,14 @@ namespace Temperance.Extraction
                     }
                 }
 
-                if (Lookup(name, i, end) is { } kind)
+                if (first && end - i == 3 && string.Compare(name, i, "try", 0, 3, StringComparison.OrdinalIgnoreCase) == 0)
                 {
-                    return kind;
+                    first = false;
+                    i = end;
+                    continue;
                 }
 
-                i = end;
+                return Lookup(name, i, end);
             }
 
             return null;

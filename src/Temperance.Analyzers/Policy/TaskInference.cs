@@ -5,8 +5,9 @@ using Temperance.Model;
 namespace Temperance.Policy
 {
     /// <summary>
-    /// Decides a request's task from its signals, strongest first: annotation, then <c>temperance.task</c>, then the
-    /// response shape, then names and prompt text. Weak signals (names, prompts) count only when they all agree.
+    /// Decides a request's task from its signals, strongest first: annotation, then <c>temperance.task</c>, then prompt
+    /// text, then leading verbs of names; a structured response format counts only beside a name or prompt that agrees.
+    /// Weak signals count only when they agree.
     /// </summary>
     internal static class TaskInference
     {
@@ -38,21 +39,25 @@ namespace Temperance.Policy
                 return new TaskEvidence(configured, "from " + signal.Evidence, new[] { signal });
             }
 
-            var weak = request.TaskSignals.Where(s => s.Source is TaskSignalSource.Name or TaskSignalSource.Prompt).ToList();
+            // Prompt text outranks names: when the prompts agree among themselves, names that disagree are ignored.
+            var prompts = request.TaskSignals.Where(s => s.Source == TaskSignalSource.Prompt).ToList();
+            var promptKinds = prompts.Select(s => s.Kind).Distinct().ToList();
+            var weak = promptKinds.Count == 1 ? prompts : request.TaskSignals.Where(s => s.Source is TaskSignalSource.Name or TaskSignalSource.Prompt).ToList();
             var weakKinds = weak.Select(s => s.Kind).Distinct().ToList();
             var agreed = weakKinds.Count == 1 ? weakKinds[0] : null;
 
             if (IsStructured(request.ResponseShape))
             {
+                // A structured answer alone is not a task (a recipe or a story outline comes back as JSON too); with a name
+                // or prompt that agrees it decides: extraction, or another structured task the names and prompts name.
                 var shape = new TaskSignal("extraction", TaskSignalSource.ResponseShape, ShapeText(request));
-                // A structured answer is extraction unless the names and prompts agree it is another structured task.
-                if (agreed != null && agreed != "extraction" && StructuredKinds.Contains(agreed))
+                if (agreed != null && StructuredKinds.Contains(agreed))
                 {
-                    var first = weak.First();
+                    var first = weak.First(s => s.Kind == agreed);
                     return new TaskEvidence(agreed, $"from {first.Evidence} and {shape.Evidence}", new[] { first, shape });
                 }
 
-                return new TaskEvidence("extraction", "from " + shape.Evidence, new[] { shape });
+                return null;
             }
 
             if (agreed != null)

@@ -7,8 +7,8 @@ namespace Temperance.Rules
 {
     /// <summary>
     /// SAMP006 (Info): a setting another setting cancels. Temperature 0 is greedy decoding, so truncating the candidate
-    /// set (top-p below 1, top-k above 1, min-p above 0) changes nothing; top-k 1 leaves one token, so temperature has
-    /// nothing to reshape; ONNX <c>do_sample = false</c> is greedy search, so every sampling knob is ignored.
+    /// set (top-p below 1, top-k above 1, min-p above 0) changes nothing; top-k 1 or top-p 0 leaves one token, so
+    /// temperature has nothing to reshape; ONNX <c>do_sample = false</c> is greedy search, so every sampling knob is ignored.
     /// </summary>
     internal static class InertSettingRule
     {
@@ -38,6 +38,15 @@ namespace Temperance.Rules
             if (request.KindOf(Setting.TopK, out var k) == ValueKind.Known && k == 1 && temperature == ValueKind.Known && t > 0)
             {
                 foreach (var finding in Inert(request, Setting.Temperature, v => v > 0, "top-k is 1: only the single most likely token is left to sample"))
+                {
+                    yield return finding;
+                }
+            }
+
+            // top-p 0 keeps only the most likely token (providers treat it as greedy), so temperature has nothing to reshape.
+            if (request.KindOf(Setting.TopP, out var p) == ValueKind.Known && p == 0 && temperature == ValueKind.Known && t > 0)
+            {
+                foreach (var finding in Inert(request, Setting.Temperature, v => v > 0, "top-p is 0: only the single most likely token is left to sample"))
                 {
                     yield return finding;
                 }

@@ -7,7 +7,7 @@ namespace Temperance.Rules
 {
     /// <summary>
     /// SAMP004: temperature and top-p both changed from the provider's defaults. A value written out that equals the
-    /// default is no change; temperature 0 is SAMP006's case (top-p is then inert, not fighting).
+    /// default is no change; temperature 0 or top-p 0 is SAMP006's case (one of them is then inert, not fighting).
     /// </summary>
     internal static class TemperatureAndTopPRule
     {
@@ -15,9 +15,9 @@ namespace Temperance.Rules
         {
             if (request.KindOf(Setting.Temperature, out var temperature) != ValueKind.Known
                 || request.KindOf(Setting.TopP, out var topP) != ValueKind.Known
-                || temperature == 0)
+                || temperature == 0 || topP == 0)
             {
-                yield break;
+                yield break; // greedy either way: SAMP006 names the inert setting
             }
 
             if (policy.Default(request.Provider, Setting.Temperature) is not { } defaultTemperature

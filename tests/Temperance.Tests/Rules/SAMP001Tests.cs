@@ -17,7 +17,7 @@ public class SAMP001Tests
 
             class Manifests
             {
-                ChatCompletionOptions Options() => new ChatCompletionOptions
+                ChatCompletionOptions ExtractCargo() => new ChatCompletionOptions
                 {
                     {|#0:Temperature = 0.9f|},
                     ResponseFormat = ChatResponseFormat.CreateJsonSchemaFormat("cargo", BinaryData.FromString("{}")),
@@ -25,7 +25,7 @@ public class SAMP001Tests
             }
             """,
             Verify.Diagnostic("SAMP001").WithLocation(0).WithMessage(
-                "Temperature 0.9 is above the ceiling 0.3 for task 'extraction' (task from the JSON-schema response format (ChatResponseFormat.CreateJsonSchemaFormat(\"cargo\", BinaryDat…); ceiling from temperance.task.extraction.max_temperature)"));
+                "Temperature 0.9 is above the ceiling 0.3 for task 'extraction' (task from the method name 'ExtractCargo' and the JSON-schema response format (ChatResponseFormat.CreateJsonSchemaFormat(\"cargo\", BinaryDat…); ceiling from temperance.task.extraction.max_temperature)"));
     }
 
     [Fact]
@@ -60,7 +60,7 @@ public class SAMP001Tests
 
             class Berths
             {
-                ChatCompletionOptions WriteSqlForBerthReport() => new ChatCompletionOptions { {|SAMP001:Temperature = 0.9f|} };
+                ChatCompletionOptions TranslateBerthNotice() => new ChatCompletionOptions { {|SAMP001:Temperature = 0.9f|} };
             }
             """);
     }
@@ -123,7 +123,7 @@ public class SAMP001Tests
 
             class Reservations
             {
-                async Task<Booking> Read(IChatClient client, string email)
+                async Task<Booking> ExtractBooking(IChatClient client, string email)
                 {
                     var options = new ChatOptions { {|SAMP001:Temperature = 0.9f|} };
                     return (await client.GetResponseAsync<Booking>(email, options)).Result;
@@ -140,7 +140,7 @@ public class SAMP001Tests
 
             class Gate
             {
-                DefaultSamplingPipeline Pipeline() => new DefaultSamplingPipeline { {|SAMP001:Temperature = 0.6f|}, Grammar = new Grammar("root ::= \"open\" | \"closed\"", "root") };
+                DefaultSamplingPipeline ClassifyGate() => new DefaultSamplingPipeline { {|SAMP001:Temperature = 0.6f|}, Grammar = new Grammar("root ::= \"open\" | \"closed\"", "root") };
             }
             """);
     }
@@ -154,7 +154,7 @@ public class SAMP001Tests
 
             class Gate
             {
-                ChatRequest Request() => new ChatRequest { Model = "llama3.2", Format = "json", Options = new RequestOptions { {|SAMP001:Temperature = 0.9f|} } };
+                ChatRequest ExtractGateReading() => new ChatRequest { Model = "llama3.2", Format = "json", Options = new RequestOptions { {|SAMP001:Temperature = 0.9f|} } };
             }
             """);
     }
@@ -167,7 +167,7 @@ public class SAMP001Tests
 
             class Gate
             {
-                void Configure(Model model)
+                void ExtractGateLog(Model model)
                 {
                     var p = new GeneratorParams(model);
                     p.SetGuidance("json_schema", "{}");
@@ -197,9 +197,9 @@ public class SAMP001Tests
     }
 
     [Fact]
-    public async Task WeakSignalsThatDisagree_DoNotTrigger()
+    public async Task PromptOutranksTheMethodName_Triggers()
     {
-        // Method name says translation, the prompt says classification: no task, no warning.
+        // Method name says translation, the prompt says classification: the prompt text is the stronger evidence.
         await Verify.AnalyzerAsync("""
             using System.Threading.Tasks;
             using Microsoft.Extensions.AI;
@@ -207,7 +207,27 @@ public class SAMP001Tests
             class Mixed
             {
                 Task<ChatResponse> TranslateNotice(IChatClient client, string text) =>
-                    client.GetResponseAsync("Classify this notice as urgent or routine: " + text, new ChatOptions { Temperature = 0.9f });
+                    client.GetResponseAsync("Classify this notice as urgent or routine: " + text, new ChatOptions { {|SAMP001:Temperature = 0.9f|} });
+            }
+            """);
+    }
+
+    [Fact]
+    public async Task PromptsThatDisagree_DoNotTrigger()
+    {
+        // One prompt says classification, the other translation: no task, no warning.
+        await Verify.AnalyzerAsync("""
+            using System.Threading.Tasks;
+            using Microsoft.Extensions.AI;
+
+            class Mixed
+            {
+                Task<ChatResponse> Notice(IChatClient client, string text) =>
+                    client.GetResponseAsync(new[]
+                    {
+                        new ChatMessage(ChatRole.System, "Classify this notice as urgent or routine."),
+                        new ChatMessage(ChatRole.User, "Translate it to Dutch first: " + text),
+                    }, new ChatOptions { Temperature = 0.9f });
             }
             """);
     }
@@ -450,14 +470,14 @@ public class SAMP001Tests
 
             class Berths
             {
-                ChatOptions WriteSqlForBerthReport() => new ChatOptions { {|SAMP001:Temperature = /* keep */ 0.9f|} };
+                ChatOptions TranslateBerthNotice() => new ChatOptions { {|SAMP001:Temperature = /* keep */ 0.9f|} };
             }
             """, """
             using Microsoft.Extensions.AI;
 
             class Berths
             {
-                ChatOptions WriteSqlForBerthReport() => new ChatOptions { Temperature = /* keep */ 0.2f };
+                ChatOptions TranslateBerthNotice() => new ChatOptions { Temperature = /* keep */ 0.2f };
             }
             """);
     }

@@ -231,7 +231,7 @@ public class SAMP002Tests
                 {
                     var parameters = new MessageCreateParams { Model = "claude-haiku-4-5", MaxTokens = 64, Messages = Array.Empty<MessageParam>() };
                     Message message = await {|#0:client.Messages.Create(parameters)|};
-                    Assert.Equal("approved", message.Content.Count.ToString());
+                    Assert.Equal("approved", message.Content.First().ToString());
                 }
             }
             """,
