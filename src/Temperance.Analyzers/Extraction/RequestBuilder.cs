@@ -201,6 +201,7 @@ namespace Temperance.Extraction
                     }
 
                     var request = NewRequest(surface, creation, originVisible: true);
+                    MarkUndeclared(request, objectCreation.Type, surface);
                     ReadInitializer(surface, objectCreation.Initializer, request);
                     AddTargets(request, objectCreation, surface);
                     request.SeedAvailable = SeedAvailable(surface, objectCreation.Type);
@@ -231,6 +232,26 @@ namespace Temperance.Extraction
                     ReadInitializer(recordSurface, with.Initializer, derived);
                     Track(new Instance(derived, creation, HolderOf(creation)));
                     return;
+            }
+        }
+
+        /// <summary>
+        /// A type derived from a declared surface (another provider's connector settings) with sampling members of its own
+        /// that Surfaces does not declare: those settings are Unknown, never reported as unset.
+        /// </summary>
+        private void MarkUndeclared(Request request, ITypeSymbol? type, SurfaceDefinition surface)
+        {
+            for (var current = type as INamedTypeSymbol; current != null && catalog.TypeOf(surface.MetadataName) is { } declared
+                && !SymbolEqualityComparer.Default.Equals(current.OriginalDefinition, declared); current = current.BaseType)
+            {
+                foreach (var member in current.GetMembers())
+                {
+                    if (member is IPropertySymbol { IsStatic: false } property && !surface.Members.ContainsKey(property.Name)
+                        && SettingNames.OfMemberName(property.Name) is { } setting)
+                    {
+                        request.UndeclaredSettings.Add(setting);
+                    }
+                }
             }
         }
 
@@ -762,6 +783,11 @@ namespace Temperance.Extraction
             if (surface.Members.TryGetValue(name, out var setting) && catalog.Find(property.ContainingType) != null)
             {
                 request.AddRange(ValueReader.Read(setting, name, value, property.Type, syntax.GetLocation()));
+            }
+            else if (request.UndeclaredSettings.Count > 0 && SettingNames.OfMemberName(name) is { } undeclared && request.UndeclaredSettings.Contains(undeclared))
+            {
+                // Written, but on a member whose provider, range and default are not declared: known to be set, value not judged.
+                request.Add(new SettingWrite(undeclared, ValueKind.Unknown, 0, name, syntax.GetLocation(), null, NumericKind.Double, false, null));
             }
             else if (name == surface.ModelMember)
             {

@@ -113,6 +113,12 @@ namespace Temperance.Model
             return last;
         }
 
+        /// <summary>
+        /// Settings the options type carries in members Surfaces does not declare (a connector's settings class derived from
+        /// a declared base): their defaults and ranges are not known, so they are Unknown rather than Unset.
+        /// </summary>
+        public HashSet<Setting> UndeclaredSettings { get; } = new HashSet<Setting>();
+
         /// <summary>What the request ends up with for a setting: the last unconditional write wins, in source order.</summary>
         public ValueKind KindOf(Setting setting, out double value)
         {
@@ -120,7 +126,7 @@ namespace Temperance.Model
             var tail = LastWrite(setting);
             if (tail == null)
             {
-                return OriginVisible ? ValueKind.Unset : ValueKind.Unknown;
+                return OriginVisible && !UndeclaredSettings.Contains(setting) ? ValueKind.Unset : ValueKind.Unknown;
             }
 
             if (!tail.FromConditional)

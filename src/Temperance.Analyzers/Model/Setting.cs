@@ -37,6 +37,24 @@ namespace Temperance.Model
         /// <summary>Every setting, made once (Enum.GetValues allocates a new array per call).</summary>
         private static readonly Setting[] AllSettings = (Setting[])System.Enum.GetValues(typeof(Setting));
 
+        /// <summary>
+        /// The setting a member of a settings type not declared in Surfaces most likely carries, by its name
+        /// (<c>Temperature</c>, <c>TopP</c>, <c>top_k</c>, <c>RepeatPenalty</c> …); null for anything else.
+        /// </summary>
+        public static Setting? OfMemberName(string name) => name.Replace("_", string.Empty).ToLowerInvariant() switch
+        {
+            "temperature" => Setting.Temperature,
+            "topp" => Setting.TopP,
+            "topk" => Setting.TopK,
+            "minp" => Setting.MinP,
+            "seed" or "randomseed" => Setting.Seed,
+            "frequencypenalty" => Setting.FrequencyPenalty,
+            "presencepenalty" => Setting.PresencePenalty,
+            "repeatpenalty" or "repetitionpenalty" => Setting.RepetitionPenalty,
+            "candidatecount" or "resultsperprompt" => Setting.Candidates,
+            _ => null,
+        };
+
         /// <summary>The setting a trade name stands for, or null.</summary>
         public static Setting? Parse(string name)
         {

@@ -49,7 +49,7 @@ namespace Temperance.Policy
             var values = new Dictionary<string, string>(StringComparer.Ordinal);
             foreach (var source in sources)
             {
-                foreach (var key in source.Keys)
+                foreach (var key in OptionKeys.ListedKeys(source))
                 {
                     if (key.StartsWith(OptionKeys.Prefix, StringComparison.Ordinal) && source.TryGetValue(key, out var value))
                     {

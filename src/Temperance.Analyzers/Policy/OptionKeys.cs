@@ -50,5 +50,26 @@ namespace Temperance.Policy
             "extraction", "classification", "code", "evaluation", "tool_use",
             "summarization", "translation", "conversation", "creative", "brainstorming",
         };
+
+        /// <summary>
+        /// The keys an options object lists. Some hosts and older tools do not implement <c>Keys</c> (it throws
+        /// NotImplementedException); then no key is listed, which only means the keys that must be enumerated (model
+        /// families, team surfaces, misspellings) are not found. Keys read by name still work.
+        /// </summary>
+        public static System.Collections.Generic.IEnumerable<string> ListedKeys(Microsoft.CodeAnalysis.Diagnostics.AnalyzerConfigOptions options)
+        {
+            try
+            {
+                return System.Linq.Enumerable.ToList(options.Keys);
+            }
+            catch (System.NotImplementedException)
+            {
+                return System.Array.Empty<string>();
+            }
+            catch (System.NotSupportedException)
+            {
+                return System.Array.Empty<string>();
+            }
+        }
     }
 }

@@ -269,7 +269,7 @@ namespace Temperance.Policy
         private static void AddFamilyNames(AnalyzerConfigOptions options, SortedSet<string> names)
         {
             const string Suffix = ".match";
-            foreach (var key in options.Keys)
+            foreach (var key in OptionKeys.ListedKeys(options))
             {
                 if (key.Length > OptionKeys.ModelPrefix.Length + Suffix.Length
                     && key.StartsWith(OptionKeys.ModelPrefix, StringComparison.Ordinal) && key.EndsWith(Suffix, StringComparison.Ordinal))

@@ -51,6 +51,27 @@ public static class Verify
         return test.RunAsync();
     }
 
+    /// <summary>
+    /// Several files of one project (a fake or a handler declared in another file than the test using it), with optional
+    /// global options such as <c>build_property.IsTestProject = true</c>.
+    /// </summary>
+    public static Task ProjectAsync(string[] sources, string? globalOptions, params DiagnosticResult[] expected)
+    {
+        var test = new TemperanceTest(sources[0]);
+        foreach (var more in sources.Skip(1))
+        {
+            test.TestState.Sources.Add(more);
+        }
+
+        if (globalOptions != null)
+        {
+            test.TestState.AnalyzerConfigFiles.Add(("/.project.globalconfig", "is_global = true\n" + globalOptions));
+        }
+
+        test.ExpectedDiagnostics.AddRange(expected);
+        return test.RunAsync();
+    }
+
     public static Task FixAsync(string source, string fixedSource, string? editorConfig = null)
     {
         var test = new TemperanceTest(source, editorConfig, fixedSource);
