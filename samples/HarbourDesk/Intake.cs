@@ -15,8 +15,8 @@ public sealed class LlmTaskAttribute(string kind) : Attribute
 /// <summary>Each request here shows one way Temperance learns what a call is for (SAMP001).</summary>
 public static class Intake
 {
-    // Response shape: a JSON schema means extraction; 0.9 is above its ceiling of 0.3.
-    public static ChatCompletionOptions LuggageClaimOptions() => new ChatCompletionOptions
+    // Response shape with a name that agrees: a JSON schema and "Extract…" mean extraction; 0.9 is above its ceiling of 0.3.
+    public static ChatCompletionOptions ExtractLuggageClaimOptions() => new ChatCompletionOptions
     {
         Temperature = 0.9f,
         ResponseFormat = ChatResponseFormat.CreateJsonSchemaFormat("luggage_claim", BinaryData.FromString("""{"type":"object"}""")),
@@ -34,8 +34,15 @@ public static class Intake
         return completion.Content[0].Text;
     }
 
-    // Method name: SQL means code; ceiling 0.5.
-    public static OpenAIPromptExecutionSettings WriteSqlForSailingsReport() => new OpenAIPromptExecutionSettings { Temperature = 0.8 };
+    // Method name: a leading task verb ("Translate…") names the task; ceiling 0.7.
+    public static OpenAIPromptExecutionSettings TranslateSailingNotice() => new OpenAIPromptExecutionSettings { Temperature = 0.8 };
+
+    // Silent: a JSON schema alone is not extraction (a cafe menu suggestion comes back as JSON too).
+    public static ChatCompletionOptions SuggestCafeMenuOptions() => new ChatCompletionOptions
+    {
+        Temperature = 0.9f,
+        ResponseFormat = ChatResponseFormat.CreateJsonSchemaFormat("cafe_menu", BinaryData.FromString("""{"type":"object"}""")),
+    };
 
     // Annotation: the strongest signal. An LLM judge grading agents' replies.
     [LlmTask("evaluation")]

@@ -133,8 +133,20 @@ namespace Temperance
 
                 foreach (var rule in Rules.RuleSet.All)
                 {
-                    foreach (var finding in rule(request, state.Policy))
+                    foreach (var found in rule(request, state.Policy))
                     {
+                        var finding = found;
+                        if (request.BorrowedFrom != null)
+                        {
+                            if (!Rules.RuleSet.DependsOnCallSite(finding.Descriptor))
+                            {
+                                continue;
+                            }
+
+                            // A value written in the helper is reported where this call sends it.
+                            finding = finding.Location == request.SendingCallLocation ? finding : finding.At(request.Location);
+                        }
+
                         // Clone and with inherit writes; a location is judged once. Code under #line hidden is generated
                         // (Razor, T4) and silent, as the driver would have made it (GeneratedCode.cs says why we decide).
                         if (!GeneratedCode.IsHidden(finding.Location) && reported.Add((finding.Descriptor.Id, finding.Location)))

@@ -323,6 +323,7 @@ namespace Temperance.Extraction
 
             var serialises = BlockCollector.IsSerialisation(method);
             AddImplicitRequest(invocation);
+            BorrowFromHelpers(invocation);
             foreach (var operand in Operands(invocation))
             {
                 var instance = InstanceOf(operand, invocation.Syntax.SpanStart);
@@ -393,6 +394,51 @@ namespace Temperance.Extraction
             }
             request.SeedAvailable = SeedAvailable(surface, null);
             Track(new Instance(request, invocation, null) { ImplicitSend = invocation });
+        }
+
+        /// <summary>
+        /// <c>client.CompleteChat(messages, Options())</c> where <c>Options()</c> is a helper in this file that returns new
+        /// options: the request sent here has the helper's writes and this call's task, test and client. Only the rules
+        /// that depend on the call site judge it (the helper's own block judges the values).
+        /// </summary>
+        private void BorrowFromHelpers(IInvocationOperation send)
+        {
+            if (!catalog.IsSend(send.TargetMethod))
+            {
+                return;
+            }
+
+            foreach (var argument in send.Arguments)
+            {
+                if (argument.ArgumentKind == ArgumentKind.DefaultValue || argument.Parameter == null || catalog.Find(argument.Parameter.Type) == null
+                    || ValueReader.Unwrap(argument.Value) is not IInvocationOperation { TargetMethod: { IsAbstract: false } helper } helperCall
+                    || helper.DeclaringSyntaxReferences.Length != 1 || helperCall.SemanticModel is not { } model)
+                {
+                    continue;
+                }
+
+                var syntax = helper.DeclaringSyntaxReferences[0].GetSyntax();
+                if (syntax.SyntaxTree != model.SyntaxTree || model.GetOperation(syntax) is not { } body)
+                {
+                    continue;
+                }
+
+                var returned = body.DescendantsAndSelf().OfType<IReturnOperation>().Select(r => ValueReader.Unwrap(r.ReturnedValue)).ToList();
+                if (returned.Count != 1 || returned[0] is not IObjectCreationOperation creation || catalog.Find(creation.Type) is not { } surface)
+                {
+                    continue;
+                }
+
+                var request = new Request(surface.Provider, surface.ShortName, argument.Value.Syntax.GetLocation(), context, originVisible: true)
+                {
+                    BorrowedFrom = helper.Name,
+                };
+                MarkUndeclared(request, creation.Type, surface);
+                ReadInitializer(surface, creation.Initializer, request);
+                AddTargets(request, creation, surface);
+                request.SeedAvailable = SeedAvailable(surface, creation.Type);
+                Track(new Instance(request, helperCall, null));
+            }
         }
 
         /// <summary>The client a call goes through: the instance, or the <c>this</c> argument of an extension method.</summary>

@@ -70,6 +70,12 @@ namespace Temperance.Model
         /// <summary>In a test: the exact assertion the model's output reaches ("Assert.Equal"), and where.</summary>
         public string? ExactAssertion { get; set; }
         public Location? ExactAssertionLocation { get; set; }
+        /// <summary>
+        /// The helper whose returned options this call site sends (<c>CompleteChat(messages, Options())</c>): findings that
+        /// depend on the call site are reported here, at the helper call.
+        /// </summary>
+        public string? BorrowedFrom { get; set; }
+
         /// <summary>How far the options get (see <see cref="Model.Reach"/>), and in words why, for the inventory.</summary>
         public Reach Reach { get; set; } = Reach.Sent;
         public string? ReachNote { get; set; }

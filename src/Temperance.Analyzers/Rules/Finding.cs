@@ -14,6 +14,17 @@ namespace Temperance.Rules
             MessageArgs = messageArgs;
         }
 
+        private Finding(Finding original, Location location)
+        {
+            Descriptor = original.Descriptor;
+            Location = location;
+            Properties = original.Properties;
+            MessageArgs = original.MessageArgs;
+        }
+
+        /// <summary>The same finding reported elsewhere (at the call site that sends options a helper built).</summary>
+        public Finding At(Location location) => new Finding(this, location);
+
         public DiagnosticDescriptor Descriptor { get; }
         public Location Location { get; }
         public ImmutableDictionary<string, string?> Properties { get; }

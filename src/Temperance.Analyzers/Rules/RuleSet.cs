@@ -21,5 +21,14 @@ namespace Temperance.Rules
                 TemperatureAndTopPRule.Evaluate,
                 InertSettingRule.Evaluate,
             };
+
+        /// <summary>
+        /// Rules whose verdict depends on where options are sent (the task, the test, the client's model), not on the
+        /// values alone. For options a helper builds and a call site sends, only these are judged at the call site: the
+        /// helper's own block already judges the values.
+        /// </summary>
+        public static bool DependsOnCallSite(Microsoft.CodeAnalysis.DiagnosticDescriptor descriptor) =>
+            descriptor == Descriptors.TemperatureAboveTaskCeiling || descriptor == Descriptors.RandomSamplingInExactTest
+            || descriptor == Descriptors.MissingSeed || descriptor == Descriptors.SettingRejectedOrDropped;
     }
 }

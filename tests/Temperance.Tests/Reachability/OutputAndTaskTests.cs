@@ -235,4 +235,54 @@ public class OutputAndTaskTests
             }
             """);
     }
+
+    [Fact]
+    public async Task OptionsFromAHelper_GetTheTaskOfTheCallSiteThatSendsThem()
+    {
+        await Verify.AnalyzerAsync("""
+            using System.ClientModel;
+            using System.Collections.Generic;
+            using System.Threading.Tasks;
+            using OpenAI.Chat;
+
+            class CrewDesk
+            {
+                private readonly ChatClient client = new ChatClient("gpt-4o-mini", new ApiKeyCredential("key"));
+
+                private static ChatCompletionOptions Sampling() => new ChatCompletionOptions { Temperature = 0.9f };
+
+                Task<ClientResult<ChatCompletion>> CrewList(string manifest) =>
+                    client.CompleteChatAsync(new List<ChatMessage> { new UserChatMessage("Extract the crew names as JSON: " + manifest) }, {|SAMP001:Sampling()|});
+
+                Task<ClientResult<ChatCompletion>> Welcome(string name) =>
+                    client.CompleteChatAsync(new List<ChatMessage> { new UserChatMessage("Welcome " + name + " aboard.") }, Sampling());
+            }
+            """);
+    }
+
+    [Fact]
+    public async Task OptionsFromAHelper_InATestThatComparesExactly_Triggers()
+    {
+        await Verify.AnalyzerAsync("""
+            using System.ClientModel;
+            using System.Threading.Tasks;
+            using Microsoft.Extensions.AI;
+            using OpenAI.Chat;
+            using Xunit;
+
+            public class BerthTests
+            {
+            """ + LiveClient + """
+
+                private static ChatOptions Warm() => new ChatOptions { Temperature = 0.6f };
+
+                [Fact]
+                public async Task Berth_IsNamed()
+                {
+                    var response = await {|SAMP002:Client.GetResponseAsync("Which berth? Reply with the number only.", Warm())|};
+                    Assert.Equal("7", response.Text);
+                }
+            }
+            """);
+    }
 }
