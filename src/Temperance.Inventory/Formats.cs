@@ -13,13 +13,25 @@ public static class Formats
 
     private static string Where(RequestRow row, string root) => $"{Path.GetRelativePath(root, row.File)}:{row.Line}";
 
+    /// <summary>A request that never reaches a model is listed with the reason it is not judged (the double, the serialiser …).</summary>
+    private static string Findings(RequestRow row, Func<FindingRow, string> show, string separator) =>
+        row.NotJudged != null ? "not judged: " + row.NotJudged
+        : row.Findings.Count == 0 ? "-"
+        : string.Join(separator, row.Findings.Select(show).Distinct());
+
+    private static string Summary(IReadOnlyList<RequestRow> rows)
+    {
+        var notJudged = rows.Count(r => r.NotJudged != null);
+        return $"{rows.Count} requests, {rows.Sum(r => r.Findings.Count)} findings" + (notJudged == 0 ? string.Empty : $" ({notJudged} requests not judged: never sent to a model or sent to a test double)");
+    }
+
     public static string Table(IReadOnlyList<RequestRow> rows, string root)
     {
         var header = new[] { "where", "sdk", "model", "task", "temperature", "top_p", "seed", "findings" };
         var lines = rows.Select(r => new[]
         {
             Where(r, root), r.Sdk, r.Model ?? "-", r.Task ?? "-", Value(r.Settings[0]), Value(r.Settings[1]), Value(r.Settings[3]),
-            r.Findings.Count == 0 ? "-" : string.Join(" ", r.Findings.Select(f => f.Id).Distinct()),
+            Findings(r, f => f.Id, " "),
         }).ToList();
         var widths = header.Select((h, i) => Math.Min(48, Math.Max(h.Length, lines.Select(l => l[i].Length).DefaultIfEmpty(0).Max()))).ToArray();
         var text = new StringBuilder();
@@ -27,7 +39,7 @@ public static class Formats
         Line(header);
         Line(widths.Select(w => new string('-', w)).ToArray());
         lines.ForEach(Line);
-        text.AppendLine($"{rows.Count} requests, {rows.Sum(r => r.Findings.Count)} findings");
+        text.AppendLine(Summary(rows));
         return text.ToString();
     }
 
@@ -37,7 +49,7 @@ public static class Formats
         foreach (var r in rows)
         {
             var task = r.Task == null ? "-" : $"{r.Task} ({r.TaskEvidence})";
-            var findings = r.Findings.Count == 0 ? "-" : string.Join("<br>", r.Findings.Select(f => $"{f.Id} {f.Message}"));
+            var findings = Findings(r, f => $"{f.Id} {f.Message}", "<br>");
             text.AppendLine($"| `{Where(r, root)}` | {r.Sdk} | {r.Model ?? "-"} | {Escape(task)} | {Value(r.Settings[0])} | {Value(r.Settings[1])} | {Value(r.Settings[3])} | {Escape(findings)} |");
         }
 
@@ -58,6 +70,7 @@ public static class Formats
             task = r.Task == null ? null : new { kind = r.Task, evidence = r.TaskEvidence },
             settings = r.Settings.ToDictionary(s => s.Name, s => new { value = s.Value, source = s.Source }),
             findings = r.Findings.Select(f => new { id = f.Id, severity = f.Severity, message = f.Message }),
+            not_judged = r.NotJudged,
         }), new JsonSerializerOptions { WriteIndented = true });
 
     /// <summary>A self-contained page: a bar chart of temperature by task (inline SVG) and a sortable table (inline script).</summary>
@@ -93,7 +106,7 @@ public static class Formats
             var cells = new[]
             {
                 Where(r, root), r.Sdk, r.Model ?? "-", r.Task == null ? "-" : $"{r.Task} ({r.TaskEvidence})", Value(r.Settings[0]), Value(r.Settings[1]), Value(r.Settings[3]),
-                string.Join("; ", r.Findings.Select(f => $"{f.Id}: {f.Message}")),
+                Findings(r, f => $"{f.Id}: {f.Message}", "; "),
             };
             table.Append("<tr>").Append(string.Concat(cells.Select(c => $"<td>{WebUtility.HtmlEncode(c)}</td>"))).Append("</tr>");
         }
@@ -105,7 +118,7 @@ public static class Formats
             <style>body{font-family:sans-serif;margin:2em}table{border-collapse:collapse;font-size:13px}td,th{border:1px solid #ccc;padding:4px 8px;vertical-align:top}th{cursor:pointer;background:#f4f4f4}</style>
             </head><body>
             <h1>Temperance inventory</h1>
-            <p id="summary">{{rows.Count}} requests, {{rows.Sum(r => r.Findings.Count)}} findings</p>
+            <p id="summary">{{WebUtility.HtmlEncode(Summary(rows))}}</p>
             <h2>Highest temperature by task</h2>
             {{svg}}
             <h2>Requests</h2>

@@ -19,7 +19,8 @@ public sealed record FindingRow(string Id, string Severity, string Message);
 /// <summary>One LLM request found in the code.</summary>
 public sealed record RequestRow(
     string Project, string File, int Line, string Sdk, string Provider, string? Model,
-    string? Task, string? TaskEvidence, IReadOnlyList<SettingRow> Settings, IReadOnlyList<FindingRow> Findings);
+    string? Task, string? TaskEvidence, IReadOnlyList<SettingRow> Settings, IReadOnlyList<FindingRow> Findings,
+    string? NotJudged = null);
 
 /// <summary>
 /// Runs the analyzer's own extraction and rules over a project: the same Surfaces, RequestBuilder, TaskInference and
@@ -114,7 +115,7 @@ public static class Inventory
             .Distinct()
             .ToList();
         return new RequestRow(project.Name, span.Path, span.StartLinePosition.Line + 1, request.Surface, request.Provider,
-            request.EffectiveModelId, task?.Kind, task?.Because, settings, findings);
+            request.EffectiveModelId, task?.Kind, task?.Because, settings, findings, request.SilentBecause);
     }
 
     private static (string, int) Key(Location location) => (location.SourceTree?.FilePath ?? string.Empty, location.SourceSpan.Start);

@@ -107,6 +107,10 @@ namespace Temperance.Extraction
                         }
 
                         return;
+                    // builder.Append(update.Text): the builder accumulates the output
+                    case IArgumentOperation { Parent: IInvocationOperation { Instance: ILocalReferenceOperation accumulator, TargetMethod.Name: "Append" or "AppendLine" } }:
+                        tainted.Add(accumulator.Local);
+                        return;
                     // text += chunk.Message.Content
                     case ICompoundAssignmentOperation { Target: ILocalReferenceOperation accumulated } compound when ReferenceEquals(compound.Value, current):
                         tainted.Add(accumulated.Local);

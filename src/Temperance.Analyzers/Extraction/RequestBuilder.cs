@@ -166,7 +166,7 @@ namespace Temperance.Extraction
                 request.ResponseShapeEvidence = $"{generic.Name}<{generic.TypeArguments[0].Name}>";
             }
 
-            request.TestDouble = new TestDoubles(Operations, context.InTestCode).Describe(client);
+            request.TestDouble = new TestDoubles(catalog, Operations, context.InTestCode).Describe(client);
             if (request.TestDouble == null && innerSend != null)
             {
                 // Sent through a helper of this file: the helper's own client decides.
@@ -176,7 +176,7 @@ namespace Temperance.Extraction
                     root = root.Parent;
                 }
 
-                request.TestDouble = new TestDoubles(root.DescendantsAndSelf().ToList(), context.InTestCode).Describe(ClientOf(innerSend));
+                request.TestDouble = new TestDoubles(catalog, root.DescendantsAndSelf().ToList(), context.InTestCode).Describe(ClientOf(innerSend));
             }
 
             return send;

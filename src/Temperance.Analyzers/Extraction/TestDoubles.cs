@@ -19,13 +19,15 @@ namespace Temperance.Extraction
     {
         private const int MaxDepth = 8;
 
+        private readonly SurfaceCatalog catalog;
         private readonly IReadOnlyList<IOperation> operations;
         private readonly SemanticModel? model;
         private readonly bool inTestCode;
         private readonly HashSet<ISymbol> visited = new HashSet<ISymbol>(SymbolEqualityComparer.Default);
 
-        public TestDoubles(IReadOnlyList<IOperation> operations, bool inTestCode)
+        public TestDoubles(SurfaceCatalog catalog, IReadOnlyList<IOperation> operations, bool inTestCode)
         {
+            this.catalog = catalog;
             this.operations = operations;
             this.inTestCode = inTestCode;
             model = operations.Count > 0 ? operations[0].SemanticModel : null;
@@ -60,7 +62,7 @@ namespace Temperance.Extraction
             switch (operation)
             {
                 case IObjectCreationOperation creation:
-                    return OfType(creation.Type) ?? Arguments(creation.Arguments, depth) ?? Initializer(creation.Initializer, depth);
+                    return OfType(creation.Type) ?? CannedDelegatingHandler(creation) ?? Arguments(creation.Arguments, depth) ?? Initializer(creation.Initializer, depth);
 
                 case IInvocationOperation invocation:
                     var method = invocation.TargetMethod;
@@ -121,15 +123,62 @@ namespace Temperance.Extraction
                 return $"the in-process test server ({named.Name})";
             }
 
-            if (!inTestCode || named.TypeKind != TypeKind.Class || !named.Locations.Any(l => l.IsInSource) || IsDecorator(named)
-                || (named.BaseType?.SpecialType == SpecialType.System_Object && named.AllInterfaces.Length == 0))
+            if (!inTestCode || named.TypeKind != TypeKind.Class || !named.Locations.Any(l => l.IsInSource))
             {
-                return null; // a plain class of the project (a settings holder, a fixture) says nothing by itself
+                return null;
             }
 
-            return DerivesFromAny(named, TestingSurfaces.TransportBaseTypes)
-                ? $"'{named.Name}', a transport declared in this project that answers instead of a model"
-                : $"'{named.Name}', declared in this project";
+            if (DerivesFromAny(named, TestingSurfaces.TransportBaseTypes))
+            {
+                // A DelegatingHandler may pass requests on to a real handler: decided where it is created.
+                return DerivesFromDelegatingHandler(named) ? null : $"'{named.Name}', a transport declared in this project that answers instead of a model";
+            }
+
+            // Only a class that stands in for a client is a double: a fixture, a logger factory or the test class itself is not.
+            return ActsAsClient(named) && !IsDecorator(named) ? $"'{named.Name}', declared in this project" : null;
+        }
+
+        /// <summary>Derives from or implements a type that declares sends (IChatClient, ChatClient, IChatCompletionService …).</summary>
+        private bool ActsAsClient(INamedTypeSymbol type)
+        {
+            for (var current = type.BaseType; current != null && current.SpecialType == SpecialType.None; current = current.BaseType)
+            {
+                if (catalog.IsClientType(current))
+                {
+                    return true;
+                }
+            }
+
+            return type.AllInterfaces.Any(catalog.IsClientType);
+        }
+
+        private static bool DerivesFromDelegatingHandler(INamedTypeSymbol type)
+        {
+            for (var current = type.BaseType; current != null; current = current.BaseType)
+            {
+                if (current.Name == "DelegatingHandler" && current.ContainingNamespace?.ToDisplayString() == "System.Net.Http")
+                {
+                    return true;
+                }
+            }
+
+            return false;
+        }
+
+        /// <summary>
+        /// <c>new RecordingHandlerStub()</c>: a DelegatingHandler of the project created without an inner handler cannot
+        /// pass anything on, so it answers itself (the usual shape of a handler stub).
+        /// </summary>
+        private string? CannedDelegatingHandler(IObjectCreationOperation creation)
+        {
+            if (!inTestCode || creation.Type is not INamedTypeSymbol type || !type.Locations.Any(l => l.IsInSource) || !DerivesFromDelegatingHandler(type))
+            {
+                return null;
+            }
+
+            var inner = creation.Arguments.Any(a => a.ArgumentKind == ArgumentKind.Explicit)
+                || (creation.Initializer?.Initializers.Any(i => i is ISimpleAssignmentOperation { Target: IPropertyReferenceOperation { Property.Name: "InnerHandler" } }) ?? false);
+            return inner ? null : $"'{type.Name}', a handler declared in this project that answers instead of a model";
         }
 
         /// <summary>A class that wraps another instance of what it is (a DelegatingChatClient, a DelegatingHandler): decided by what it wraps.</summary>
@@ -137,7 +186,7 @@ namespace Temperance.Extraction
         {
             for (var current = type.BaseType; current != null; current = current.BaseType)
             {
-                if (current.Name is "DelegatingChatClient" or "DelegatingHandler" && !current.Locations.Any(l => l.IsInSource))
+                if (current.Name == "DelegatingChatClient" && !current.Locations.Any(l => l.IsInSource))
                 {
                     return true;
                 }

@@ -230,6 +230,9 @@ namespace Temperance.Surfaces
             return false;
         }
 
+        /// <summary>A type that declares sends (a client interface or class, an extension class of sends).</summary>
+        public bool IsClientType(INamedTypeSymbol type) => sendsByTypeName.ContainsKey(FullName(type.OriginalDefinition));
+
         private bool Declares(INamedTypeSymbol type, string method, bool takesOptions) =>
             sendsByTypeName.TryGetValue(FullName(type.OriginalDefinition), out var methods) && (takesOptions || methods.Contains(method));
 

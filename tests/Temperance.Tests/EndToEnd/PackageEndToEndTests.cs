@@ -148,8 +148,10 @@ public class PackageEndToEndTests : IClassFixture<PackageFixture>
 
             public static class Manifests
             {
-                // SAMP001: extraction (JSON format) at the provider default
-                public static ChatCompletionOptions ExtractCargo() => new ChatCompletionOptions { ResponseFormat = OpenAI.Chat.ChatResponseFormat.CreateJsonObjectFormat() };
+                // SAMP001: extraction (method name and JSON format) at the provider default, sent to a real client. (xunit makes
+                // this a test project, where options count only when they are sent.)
+                public static System.ClientModel.ClientResult<ChatCompletion> ExtractCargo(ChatClient chat, string text) =>
+                    chat.CompleteChat(new ChatMessage[] { new UserChatMessage(text) }, new ChatCompletionOptions { ResponseFormat = OpenAI.Chat.ChatResponseFormat.CreateJsonObjectFormat() });
             }
 
             public class ManifestTests
