@@ -36,11 +36,14 @@ namespace Temperance
             if (config.Problems.Count > 0)
             {
                 // Compilation-wide configuration (unknown keys, team surfaces) has no source location: report it once, by key.
+                // Compilation-wide configuration points at the config file line that holds the key, when the build passed the
+                // config files as additional files (the package does); else it has no location.
                 context.RegisterCompilationEndAction(end =>
                 {
                     foreach (var problem in config.Problems)
                     {
-                        end.ReportDiagnostic(Diagnostic.Create(Descriptors.InvalidConfiguration, Location.None, problem.Key, problem.Value, problem.Expected));
+                        var location = ConfigSource.Find(end.Options.AdditionalFiles, problem.Key, end.CancellationToken) ?? Location.None;
+                        end.ReportDiagnostic(Diagnostic.Create(Descriptors.InvalidConfiguration, location, problem.Key, problem.Value, problem.Expected));
                     }
                 });
             }

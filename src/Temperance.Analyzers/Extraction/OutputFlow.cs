@@ -33,6 +33,43 @@ namespace Temperance.Extraction
                 tainted.Add(local);
             }
 
+            Propagate(operations, tainted, otherOutputs);
+
+            foreach (var invocation in operations.OfType<IInvocationOperation>())
+            {
+                if (ExactAssertion(invocation) is not { } assertion)
+                {
+                    continue;
+                }
+
+                var compared = assertion.Compared.ToList();
+                var fromThis = compared.Count(c => Derives(c, send, tainted));
+                var fromOthers = compared.Count(c => Derives(c, null, otherOutputs) || allSends.Any(s => !ReferenceEquals(s, send) && Contains(c, s)));
+                // Two model outputs compared with each other (a cache test) say nothing about sampling.
+                if (fromThis > 0 && fromThis + fromOthers < 2)
+                {
+                    return (assertion.Description, invocation.Syntax.GetLocation());
+                }
+            }
+
+            return null;
+        }
+
+        /// <summary>
+        /// Whether a send's output is returned from its method (a test's helper that asks the model and returns the text),
+        /// so the callers' assertions decide.
+        /// </summary>
+        public static bool ReachesReturn(IOperation send, IReadOnlyList<IOperation> operations)
+        {
+            var tainted = new HashSet<ISymbol>(SymbolEqualityComparer.Default);
+            Spread(send, tainted);
+            Propagate(operations, tainted, new HashSet<ISymbol>(SymbolEqualityComparer.Default));
+            return operations.OfType<IReturnOperation>().Any(r => r.ReturnedValue != null && Derives(r.ReturnedValue, send, tainted));
+        }
+
+        /// <summary>Spreads outputs through the locals they are stored in until nothing changes (a few passes).</summary>
+        private static void Propagate(IReadOnlyList<IOperation> operations, HashSet<ISymbol> tainted, HashSet<ISymbol> otherOutputs)
+        {
             for (var pass = 0; pass < MaxPasses; pass++)
             {
                 var before = tainted.Count + otherOutputs.Count;
@@ -53,25 +90,6 @@ namespace Temperance.Extraction
                     break;
                 }
             }
-
-            foreach (var invocation in operations.OfType<IInvocationOperation>())
-            {
-                if (ExactAssertion(invocation) is not { } assertion)
-                {
-                    continue;
-                }
-
-                var compared = assertion.Compared.ToList();
-                var fromThis = compared.Count(c => Derives(c, send, tainted));
-                var fromOthers = compared.Count(c => Derives(c, null, otherOutputs) || allSends.Any(s => !ReferenceEquals(s, send) && Contains(c, s)));
-                // Two model outputs compared with each other (a cache test) say nothing about sampling.
-                if (fromThis > 0 && fromThis + fromOthers < 2)
-                {
-                    return (assertion.Description, invocation.Syntax.GetLocation());
-                }
-            }
-
-            return null;
         }
 
         /// <summary>Marks the locals an output value is stored in, through awaits, member reads and conversions.</summary>

@@ -91,6 +91,15 @@ namespace Temperance.Extraction
                         pair.Key.ExactAssertion = assertion.Description;
                         pair.Key.ExactAssertionLocation = assertion.Location;
                     }
+                    else if (context.Member is IMethodSymbol helper && OutputFlow.ReachesReturn(pair.Value, builder.Operations)
+                        && builder.CallerAssertion(helper, pair.Value.SemanticModel) is { } callerAssertion)
+                    {
+                        pair.Key.ExactAssertion = callerAssertion.Description;
+                        pair.Key.ExactAssertionLocation = callerAssertion.Location;
+                        pair.Key.ExactAssertionIn = callerAssertion.Caller;
+                        // The caller may hand the helper a double as its client (a mock passed in as a parameter).
+                        pair.Key.TestDouble ??= callerAssertion.Double;
+                    }
                 }
             }
 
@@ -109,6 +118,42 @@ namespace Temperance.Extraction
             }
 
             return requests.Select(i => i.Request).ToList();
+        }
+
+        /// <summary>
+        /// A helper of a test class returns the model's output: the exact assertion a caller in the same file makes on the
+        /// helper's result, if any.
+        /// </summary>
+        private (string Description, Location Location, string Caller, string? Double)? CallerAssertion(IMethodSymbol helper, SemanticModel? model)
+        {
+            if (model == null || helper.ContainingType == null)
+            {
+                return null;
+            }
+
+            foreach (var caller in helper.ContainingType.GetMembers().OfType<IMethodSymbol>())
+            {
+                if (SymbolEqualityComparer.Default.Equals(caller, helper) || caller.DeclaringSyntaxReferences.Length != 1
+                    || caller.DeclaringSyntaxReferences[0].SyntaxTree != model.SyntaxTree
+                    || model.GetOperation(caller.DeclaringSyntaxReferences[0].GetSyntax()) is not { } body)
+                {
+                    continue;
+                }
+
+                var operations = body.DescendantsAndSelf().ToList();
+                foreach (var call in operations.OfType<IInvocationOperation>())
+                {
+                    if (SymbolEqualityComparer.Default.Equals(call.TargetMethod.OriginalDefinition, helper.OriginalDefinition)
+                        && OutputFlow.FindExactAssertion(call, operations, new HashSet<IOperation> { call }) is { } found)
+                    {
+                        var doubles = new TestDoubles(catalog, operations, inTestCode: true);
+                        var passedDouble = call.Arguments.Select(a => doubles.Describe(a.Value)).FirstOrDefault(d => d != null);
+                        return (found.Description, found.Location, caller.Name, passedDouble);
+                    }
+                }
+            }
+
+            return null;
         }
 
         /// <summary>
@@ -498,7 +543,7 @@ namespace Temperance.Extraction
         /// <summary>The adapter behind an IChatClient, following locals of this block and casts (<c>(IChatClient)service</c>).</summary>
         private AdapterDefinition? ClientAdapter(IOperation? client, int depth)
         {
-            if (client == null || depth > 4)
+            if (client == null || depth > 6)
             {
                 return null;
             }
@@ -514,7 +559,13 @@ namespace Temperance.Extraction
                 return ClientAdapter(LocalInitializer(local.Local), depth + 1);
             }
 
-            return catalog.AdapterCreatedBy(operation);
+            // Middleware keeps the adapter underneath: adapter.AsBuilder().UseFunctionInvocation().Build(), new ChatClientBuilder(adapter).
+            return catalog.AdapterCreatedBy(operation) ?? operation switch
+            {
+                IInvocationOperation call => ClientAdapter(Receiver(call), depth + 1),
+                IObjectCreationOperation { Type.Name: "ChatClientBuilder", Arguments.Length: > 0 } builder => ClientAdapter(builder.Arguments[0].Value, depth + 1),
+                _ => null,
+            };
         }
 
         private IOperation? LocalInitializer(ILocalSymbol local)

@@ -95,7 +95,7 @@ namespace Temperance.Extraction
                     return Member(field.Field, depth);
 
                 case ILocalReferenceOperation local:
-                    return Local(local.Local, depth);
+                    return Local(local, depth);
 
                 case IConditionalAccessOperation access:
                     return Resolve(access.Operation, depth + 1);
@@ -265,15 +265,21 @@ namespace Temperance.Extraction
             return null;
         }
 
-        /// <summary>A local: its initializer, later assignments, and what builder calls on it were given.</summary>
-        private string? Local(ILocalSymbol local, int depth)
+        /// <summary>
+        /// A local: its initializer, later assignments, and what builder calls on it were given. Read in the body it belongs
+        /// to, which is another member's when the reference came from a field's assignment in a setup method.
+        /// </summary>
+        private string? Local(ILocalReferenceOperation reference, int depth)
         {
+            var local = reference.Local;
             if (!visited.Add(local))
             {
                 return null;
             }
 
-            foreach (var operation in operations)
+            var top = Root(reference);
+            var body = operations.Count > 0 && ReferenceEquals(Root(operations[0]), top) ? operations : top.DescendantsAndSelf().ToList();
+            foreach (var operation in body)
             {
                 var found = operation switch
                 {
@@ -291,6 +297,16 @@ namespace Temperance.Extraction
             }
 
             return null;
+        }
+
+        private static IOperation Root(IOperation operation)
+        {
+            while (operation.Parent != null)
+            {
+                operation = operation.Parent;
+            }
+
+            return operation;
         }
 
         private static IOperation? ReceiverOf(IInvocationOperation call) =>

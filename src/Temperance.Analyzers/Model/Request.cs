@@ -70,6 +70,8 @@ namespace Temperance.Model
         /// <summary>In a test: the exact assertion the model's output reaches ("Assert.Equal"), and where.</summary>
         public string? ExactAssertion { get; set; }
         public Location? ExactAssertionLocation { get; set; }
+        /// <summary>The test that makes the assertion, when it is not the member sending the request (a helper's caller).</summary>
+        public string? ExactAssertionIn { get; set; }
         /// <summary>
         /// The helper whose returned options this call site sends (<c>CompleteChat(messages, Options())</c>): findings that
         /// depend on the call site are reported here, at the helper call.

@@ -33,6 +33,13 @@ namespace Temperance.Policy
             }) + ")$",
             RegexOptions.CultureInvariant);
 
+        /// <summary>Keys that take no name part, offered as suggestions for misspellings (the rules table supplies the rest).</summary>
+        private static readonly string[] FixedKeys =
+        {
+            OptionKeys.ExtremeTemperature, OptionKeys.Task, OptionKeys.TestSeed, OptionKeys.RequireSeed, OptionKeys.TestAttributes,
+            OptionKeys.RawJson, OptionKeys.CandidatesTemperature,
+        };
+
         public List<SurfaceDefinition> Surfaces { get; } = new List<SurfaceDefinition>();
         public List<ConfigProblem> Problems { get; } = new List<ConfigProblem>();
         public RawJsonMode RawJson { get; private set; } = RawJsonMode.Auto;
@@ -59,11 +66,13 @@ namespace Temperance.Policy
             }
 
             var config = new CompilationConfig();
+            var known = values.Keys.Where(k => KnownKey.IsMatch(k)).Concat(FixedKeys).Distinct(StringComparer.Ordinal).ToList();
             foreach (var pair in values.OrderBy(p => p.Key, StringComparer.Ordinal))
             {
                 if (!KnownKey.IsMatch(pair.Key))
                 {
-                    config.Problems.Add(new ConfigProblem(pair.Key, pair.Value, "a key Temperance knows (a misspelt key is ignored until fixed; see the README's Configuration section)"));
+                    config.Problems.Add(new ConfigProblem(pair.Key, pair.Value,
+                        "a key Temperance knows" + ConfigSource.Suggestion(pair.Key, known) + " (a misspelt key is ignored until fixed; see the README's Configuration section)"));
                 }
             }
 
@@ -75,7 +84,7 @@ namespace Temperance.Policy
                     case "always": config.RawJson = RawJsonMode.Always; break;
                     case "never": config.RawJson = RawJsonMode.Never; break;
                     default:
-                        config.Problems.Add(new ConfigProblem(OptionKeys.RawJson, rawJson, "auto, always or never"));
+                        config.Problems.Add(new ConfigProblem(OptionKeys.RawJson, rawJson, "auto, always or never" + ConfigSource.Suggestion(rawJson, new[] { "auto", "always", "never" })));
                         break;
                 }
             }

@@ -27,6 +27,11 @@ namespace Temperance.Policy
 
         private static TaskEvidence? Compute(Request request, TemperancePolicy policy)
         {
+            if (policy.TaskKindInvalid)
+            {
+                return null; // temperance.task is reported (SAMP100); no other signal stands in for what the team wrote
+            }
+
             var annotation = request.TaskSignals.FirstOrDefault(s => s.Source == TaskSignalSource.Annotation);
             if (annotation != null && OptionKeys.TaskKinds.Contains(annotation.Kind))
             {

@@ -58,6 +58,14 @@ namespace Temperance.Policy
         /// <summary>The task every call in this file has, from <c>temperance.task</c>; null when not set or invalid.</summary>
         public string? TaskKind { get; }
 
+        /// <summary><c>temperance.task</c> is set to something Temperance cannot use: the task rule is skipped for the file, never guessed.</summary>
+        public bool TaskKindInvalid { get; private set; }
+
+        /// <summary>
+        /// <c>temperance.test_seed</c> is set but is not a number: fixes write no seed at all rather than a substitute.
+        /// </summary>
+        public bool TestSeedInvalid => TestSeed == null && TryGetRaw(OptionKeys.TestSeed, out var raw) && raw.Length > 0;
+
         /// <summary>Problems found so far; each is reported once per tree by the analyzer.</summary>
         public IReadOnlyList<ConfigProblem> Problems
         {
@@ -376,8 +384,9 @@ namespace Temperance.Policy
                 return kind;
             }
 
-            problems.Add(new ConfigProblem(OptionKeys.Task, raw, "one of " + string.Join(", ", OptionKeys.TaskKinds)));
+            problems.Add(new ConfigProblem(OptionKeys.Task, raw, "one of " + string.Join(", ", OptionKeys.TaskKinds) + ConfigSource.Suggestion(kind, OptionKeys.TaskKinds)));
             problemCount = problems.Count;
+            TaskKindInvalid = true;
             return null;
         }
     }

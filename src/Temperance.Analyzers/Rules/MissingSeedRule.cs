@@ -22,7 +22,7 @@ namespace Temperance.Rules
             string? why = null;
             if (request.Context.IsTest && request.ExactAssertion != null && temperatureKind == ValueKind.Known && temperature == 0)
             {
-                why = $"the test '{request.Context.Member?.Name}' compares its exact output with {request.ExactAssertion}";
+                why = $"the test '{request.ExactAssertionIn ?? request.Context.Member?.Name}' compares its exact output with {request.ExactAssertion}";
             }
             else if (request.ExactAssertion == null && TaskInference.Infer(request, policy) is { Kind: "evaluation" } task)
             {
@@ -38,9 +38,12 @@ namespace Temperance.Rules
                 yield break; // in an exact test with random sampling, SAMP002 covers the seed
             }
 
-            var seed = policy.TestSeed?.Value ?? 0;
+            // The seed a fix writes comes from temperance.test_seed; when that is not a number (SAMP100) there is no fix.
             var fix = new FixPlan();
-            fix.AddUnset(request, (Setting.Seed, seed));
+            if (!policy.TestSeedInvalid)
+            {
+                fix.AddUnset(request, (Setting.Seed, policy.TestSeed?.Value ?? 0));
+            }
 
             yield return new Finding(Descriptors.MissingSeed, request.Location, fix, why, request.Surface);
         }

@@ -43,7 +43,8 @@ namespace Temperance.Rules
 
             var seed = policy.TestSeed?.Value ?? 0;
             var fix = new FixPlan();
-            var seedUnset = request.KindOf(Setting.Seed, out _) == ValueKind.Unset && request.SeedAvailable;
+            // A test_seed that is not a number is reported (SAMP100); the fix then sets temperature only, never a stand-in seed.
+            var seedUnset = request.KindOf(Setting.Seed, out _) == ValueKind.Unset && request.SeedAvailable && !policy.TestSeedInvalid;
             if (request.LastWrite(Setting.Temperature) is { } temperatureWrite)
             {
                 fix.SetValue(temperatureWrite, 0);
@@ -62,7 +63,7 @@ namespace Temperance.Rules
             }
 
             yield return new Finding(Descriptors.RandomSamplingInExactTest, request.SendingCallLocation, fix.Combined(),
-                $"{request.ExactAssertion} in '{request.Context.Member?.Name}'", why);
+                $"{request.ExactAssertion} in '{request.ExactAssertionIn ?? request.Context.Member?.Name}'", why);
         }
 
     }
