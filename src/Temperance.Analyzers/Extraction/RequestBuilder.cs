@@ -113,7 +113,7 @@ namespace Temperance.Extraction
                     instance.Request.TaskSignals.Add(annotation);
                 }
 
-                instance.Request.TaskSignals.AddRange(TaskSignalReader.FromNames(context.Member, instance.Holder, context.InTestCode));
+                instance.Request.TaskSignals.AddRange(TaskSignalReader.FromNames(context.Member, instance.Holder, context.NamesDescribeATest));
                 instance.Request.TaskSignals.AddRange(prompts);
             }
 

@@ -77,13 +77,13 @@ namespace Temperance.Extraction
         }
 
         /// <summary>
-        /// Leading task verbs in the names of the containing member, its type and the variable holding the options. In test
-        /// code the member and type name describe the test (<c>InvoiceEvaluatorTests</c>), not the call under test.
+        /// Leading task verbs in the names of the containing member, its type and the variable holding the options. In a
+        /// test or a test class the member and type name describe the test (<c>GradeEssayTests</c>), not the call under test.
         /// </summary>
-        public static IEnumerable<TaskSignal> FromNames(ISymbol? member, ISymbol? holder, bool inTestCode = false)
+        public static IEnumerable<TaskSignal> FromNames(ISymbol? member, ISymbol? holder, bool namesDescribeATest = false)
         {
             var named = new List<(string Name, string What)>();
-            if (member != null && !inTestCode)
+            if (member != null && !namesDescribeATest)
             {
                 named.Add((member.Name, member is IMethodSymbol ? "method name" : "member name"));
                 if (member.ContainingType != null)

@@ -68,8 +68,7 @@ namespace Temperance.Extraction
         public Model.CallContext ContextOf(ISymbol owner, IReadOnlyCollection<string> extraAttributes)
         {
             var isTest = IsTestContext(owner, extraAttributes);
-            var inTestCode = isTest || testProject || IsTestClass(owner.ContainingType, extraAttributes);
-            return new Model.CallContext(owner, owner.ContainingType, isTest, inTestCode);
+            return new Model.CallContext(owner, owner.ContainingType, isTest, testProject, IsTestClass(owner.ContainingType, extraAttributes));
         }
 
         /// <summary>A class (or one containing it) that declares test methods: its fields, fixtures and helpers are test code.</summary>

@@ -7,7 +7,24 @@ namespace Temperance.Rules
     internal static class Descriptors
     {
         /// <summary>Rule pages live in <c>rules/</c> of the repository; see DEVELOPERS.md (release) before changing it.</summary>
-        public const string HelpLinkBase = "https://github.com/temperance-analyzers/temperance/blob/main/rules/";
+        /// <summary>
+        /// The rule pages' address: the repository URL the build was given (<c>TemperanceRepositoryUrl</c> in
+        /// Directory.Build.props, stored as assembly metadata) plus <c>/blob/main/rules/</c>.
+        /// </summary>
+        public static readonly string HelpLinkBase = RepositoryUrl().TrimEnd('/') + "/blob/main/rules/";
+
+        private static string RepositoryUrl()
+        {
+            foreach (var attribute in typeof(Descriptors).Assembly.GetCustomAttributes(typeof(System.Reflection.AssemblyMetadataAttribute), false))
+            {
+                if (attribute is System.Reflection.AssemblyMetadataAttribute { Key: "TemperanceRepositoryUrl", Value: { Length: > 0 } url })
+                {
+                    return url;
+                }
+            }
+
+            return "https://github.com/temperance-analyzers/temperance";
+        }
 
         private const string Sampling = "Sampling";
         private const string Reproducibility = "Reproducibility";

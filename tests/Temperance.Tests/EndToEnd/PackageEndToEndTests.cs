@@ -151,7 +151,7 @@ public class PackageEndToEndTests : IClassFixture<PackageFixture>
                 // SAMP001: extraction (method name and JSON format) at the provider default, sent to a real client. (xunit makes
                 // this a test project, where options count only when they are sent.)
                 public static System.ClientModel.ClientResult<ChatCompletion> ExtractCargo(ChatClient chat, string text) =>
-                    chat.CompleteChat(new ChatMessage[] { new UserChatMessage(text) }, new ChatCompletionOptions { ResponseFormat = OpenAI.Chat.ChatResponseFormat.CreateJsonObjectFormat() });
+                    chat.CompleteChat(new OpenAI.Chat.ChatMessage[] { new UserChatMessage(text) }, new ChatCompletionOptions { ResponseFormat = OpenAI.Chat.ChatResponseFormat.CreateJsonObjectFormat() });
             }
 
             public class ManifestTests
@@ -277,6 +277,19 @@ public class PackageEndToEndTests : IClassFixture<PackageFixture>
         var build = consumer.Build();
         Assert.True(build.ExitCode == 0, build.ToString());
         Assert.Matches("warning SAMP100: Temperance configuration 'TemperancePreset' has the value 'lenient'", build.Output);
+        // Reported against the project file that sets the property, not the package's own targets.
+        Assert.Matches(@"bad-preset/Consumer\.csproj\s*:\s*warning SAMP100", build.Output);
+    }
+
+    [Fact]
+    public void MisspeltKeyInTheTeamsEditorconfig_IsReportedAtItsLine_WithASuggestion()
+    {
+        var consumer = package.CreateConsumer("misspelt-key");
+        consumer.Write("Presets.cs", Presets);
+        consumer.Write(".editorconfig", "root = true\n\n[*.cs]\ntemperance.extreme_temprature = 1.3\n");
+        var build = consumer.Build();
+        Assert.True(build.ExitCode == 0, build.ToString());
+        Assert.Matches(@"\.editorconfig\(4,1(,4,36)?\): warning SAMP100: Temperance configuration 'temperance\.extreme_temprature' has the value '1\.3'; expected a key Temperance knows \(did you mean 'temperance\.extreme_temperature'\?\)", build.Output);
     }
 
     [Fact]

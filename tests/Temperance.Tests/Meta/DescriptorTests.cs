@@ -57,6 +57,19 @@ public class DescriptorTests
         Assert.True(Uri.IsWellFormedUriString(Get(id).HelpLinkUri, UriKind.Absolute));
     }
 
+    [Fact]
+    public void HelpLinkBase_ComesFromTheRepositoryUrlProperty_AndIsAnHttpsAddressOfTheRulesFolder()
+    {
+        var props = File.ReadAllText(Path.Combine(TestReferences.RepositoryRoot, "Directory.Build.props"));
+        var url = Regex.Match(props, @"<TemperanceRepositoryUrl[^>]*>([^<]+)</TemperanceRepositoryUrl>").Groups[1].Value.Trim();
+
+        Assert.Equal(url.TrimEnd('/') + "/blob/main/rules/", Descriptors.HelpLinkBase);
+        Assert.True(Uri.TryCreate(Descriptors.HelpLinkBase, UriKind.Absolute, out var uri), Descriptors.HelpLinkBase);
+        Assert.Equal(Uri.UriSchemeHttps, uri!.Scheme);
+        Assert.False(string.IsNullOrEmpty(uri.Host));
+        Assert.EndsWith("/rules/", uri.AbsolutePath, StringComparison.Ordinal);
+    }
+
     [Theory]
     [MemberData(nameof(Ids))]
     public void ReleaseTracking_ListsTheRuleWithItsCategoryAndSeverity(string id)
