@@ -369,20 +369,13 @@ namespace Temperance.Extraction
             var serialises = BlockCollector.IsSerialisation(method);
             AddImplicitRequest(invocation);
             BorrowFromHelpers(invocation);
+            // A hand-built payload counts once it is serialised or posted; where options go is Reachability's question.
             foreach (var operand in Operands(invocation))
             {
-                var instance = InstanceOf(operand, invocation.Syntax.SpanStart);
-                if (instance == null)
+                if (InstanceOf(operand, invocation.Syntax.SpanStart) is { IsPayload: true } payload)
                 {
-                    continue;
+                    payload.PayloadSent |= serialises;
                 }
-
-                if (instance.IsPayload)
-                {
-                    instance.PayloadSent |= serialises;
-                    continue;
-                }
-
             }
         }
 
