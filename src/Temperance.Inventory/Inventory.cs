@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Globalization;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Diagnostics;
@@ -10,17 +11,8 @@ using Temperance.Surfaces;
 
 namespace Temperance.Inventory;
 
-/// <summary>One setting of a request as the report shows it.</summary>
-public sealed record SettingRow(string Name, double? Value, string Source);
-
-/// <summary>One finding on a request.</summary>
-public sealed record FindingRow(string Id, string Severity, string Message);
-
-/// <summary>One LLM request found in the code.</summary>
-public sealed record RequestRow(
-    string Project, string File, int Line, string Sdk, string Provider, string? Model,
-    string? Task, string? TaskEvidence, IReadOnlyList<SettingRow> Settings, IReadOnlyList<FindingRow> Findings,
-    string? NotJudged = null);
+/// <summary>The requests of one project, or why it could not be analysed (then there are none to trust).</summary>
+public sealed record ProjectInventory(List<RequestRow> Rows, string? Problem);
 
 /// <summary>
 /// Runs the analyzer's own extraction and rules over a project: the same Surfaces, RequestBuilder, TaskInference and
@@ -30,16 +22,33 @@ public static class Inventory
 {
     private static readonly Setting[] Reported = { Setting.Temperature, Setting.TopP, Setting.TopK, Setting.Seed, Setting.Candidates };
 
-    public static async Task<List<RequestRow>> CollectAsync(Project project, RulesTableOptions table, CancellationToken cancellationToken)
+    /// <summary>
+    /// The project's requests, or (with no rows) the reason it cannot be analysed: not restored, or compile errors that hide
+    /// its LLM SDK. A project the tool cannot read is never reported as one without requests.
+    /// </summary>
+    public static async Task<ProjectInventory> CollectAsync(Project project, RulesTableOptions table, CancellationToken cancellationToken)
     {
         var rows = new List<RequestRow>();
+        if (ProjectCheck.NotRestored(project) is { } notRestored)
+        {
+            return new ProjectInventory(rows, notRestored);
+        }
+
         var compilation = await project.GetCompilationAsync(cancellationToken).ConfigureAwait(false);
         if (compilation == null)
         {
-            return rows;
+            return new ProjectInventory(rows, $"{ProjectCheck.Describe(project)} gives no compilation (is it a C# project?)");
         }
 
         var options = new FallbackOptions(project.AnalyzerOptions.AnalyzerConfigOptionsProvider, table);
+        var config = CompilationConfig.Read(compilation, options);
+        var teamNamespaces = config.Surfaces.Select(s => s.MetadataName.Contains('.', StringComparison.Ordinal) ? s.MetadataName[..s.MetadataName.LastIndexOf('.')] : string.Empty)
+            .Where(n => n.Length > 0);
+        if (ProjectCheck.SdkHidden(project, compilation, teamNamespaces, cancellationToken) is { } hidden)
+        {
+            return new ProjectInventory(rows, hidden);
+        }
+
         var analyzer = new TemperanceAnalyzer();
         var withAnalyzer = compilation.WithAnalyzers(ImmutableArray.Create<DiagnosticAnalyzer>(analyzer),
             new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty, options));
@@ -47,13 +56,15 @@ public static class Inventory
             .Where(d => d.Id.StartsWith("SAMP", StringComparison.Ordinal) && d.Severity != DiagnosticSeverity.Hidden)
             .ToList();
 
-        var config = CompilationConfig.Read(compilation, options);
         var catalog = SurfaceCatalog.Resolve(compilation, config.Surfaces, config.RawJson);
         var tests = TestFrameworks.Resolve(compilation, options.GlobalOptions);
+        var libraries = Libraries(SurfaceCatalog.Definitions.Concat(config.Surfaces));
+        var models = new Dictionary<SyntaxTree, SemanticModel>();
+        SemanticModel ModelOf(SyntaxTree tree) => models.TryGetValue(tree, out var known) ? known : models[tree] = compilation.GetSemanticModel(tree);
         var generated = new GeneratedCode(compilation, options);
         foreach (var tree in compilation.SyntaxTrees)
         {
-            var model = compilation.GetSemanticModel(tree);
+            var model = ModelOf(tree);
             var policy = new TemperancePolicy(options.GetOptions(tree), options.GlobalOptions);
             foreach (var (operation, owner) in MemberBlocks.Of(tree, model, cancellationToken))
             {
@@ -71,15 +82,16 @@ public static class Inventory
                 var context = tests.ContextOf(owner, policy.TestAttributes);
                 foreach (var request in RequestBuilder.Build(catalog, context, collector, new[] { operation }))
                 {
-                    rows.Add(Row(project, request, policy, diagnostics));
+                    rows.Add(Row(project, request, policy, diagnostics, ModelOf, libraries));
                 }
             }
         }
 
-        return rows;
+        return new ProjectInventory(rows, null);
     }
 
-    private static RequestRow Row(Project project, Request request, TemperancePolicy policy, List<Diagnostic> diagnostics)
+    private static RequestRow Row(Project project, Request request, TemperancePolicy policy, List<Diagnostic> diagnostics, Func<SyntaxTree, SemanticModel> models,
+        IReadOnlyDictionary<string, string> libraries)
     {
         var span = request.Location.GetLineSpan();
         var task = TaskInference.Infer(request, policy);
@@ -88,13 +100,16 @@ public static class Inventory
         {
             var kind = request.KindOf(setting, out var value);
             var last = request.LastWrite(setting);
+            var name = setting.KeyName();
             settings.Add(kind switch
             {
-                ValueKind.Known => new SettingRow(setting.KeyName(), value, last?.Origin ?? (last?.FromConditional == true ? "conditional (worst branch)" : "literal")),
-                ValueKind.Unset when policy.Default(request.Provider, setting) is { } fallback => new SettingRow(setting.KeyName(), fallback.Value,
-                    setting != Setting.Temperature || policy.UnsetMeansDefault(request.Provider) ? "default of the provider" : "unset; the provider's default is usually this"),
-                ValueKind.Unset => new SettingRow(setting.KeyName(), null, "unset"),
-                _ => new SettingRow(setting.KeyName(), null, "unknown"),
+                ValueKind.Known => new SettingRow(name, value, last?.Origin ?? (last?.FromConditional == true ? "worst branch of a conditional" : "literal")),
+                // The analyzer's own policy: only where an unset value really means the provider's default is it shown (and judged) as a number.
+                ValueKind.Unset when policy.UnsetMeansDefault(request.Provider) && policy.Default(request.Provider, setting) is { } fallback =>
+                    new SettingRow(name, fallback.Value, "default of the provider", SettingState.Default),
+                ValueKind.Unset when !policy.UnsetMeansDefault(request.Provider) => new SettingRow(name, null, "unset (left to the client)", SettingState.Unset),
+                ValueKind.Unset => new SettingRow(name, null, "unset", SettingState.Unset),
+                _ => new SettingRow(name, null, $"unknown ({UnknownOrigin.Describe(request, setting, models)})", SettingState.Unknown),
             });
         }
 
@@ -111,11 +126,54 @@ public static class Inventory
 
         var findings = diagnostics
             .Where(d => d.Location.IsInSource && (places.Contains(Key(d.Location)) || Within(d.Location, request.Location)))
-            .Select(d => new FindingRow(d.Id, d.Severity.ToString(), d.GetMessage(System.Globalization.CultureInfo.InvariantCulture)))
+            .Select(Finding)
             .Distinct()
             .ToList();
+        var ceiling = task?.Kind is { } taskKind ? policy.TaskCeiling(taskKind) : null;
         return new RequestRow(project.Name, span.Path, span.StartLinePosition.Line + 1, request.Surface, request.Provider,
-            request.EffectiveModelId, task?.Kind, task?.Because, settings, findings, request.SilentBecause);
+            request.EffectiveModelId, task?.Kind, task?.Because, settings, findings, request.SilentBecause,
+            libraries.TryGetValue(request.Surface, out var library) ? library : request.Provider, ceiling?.Value, ceiling?.Key);
+    }
+
+    private static FindingRow Finding(Diagnostic diagnostic)
+    {
+        var span = diagnostic.Location.GetLineSpan();
+        var help = diagnostic.Descriptor.HelpLinkUri;
+        return new FindingRow(diagnostic.Id, diagnostic.Severity.ToString(), diagnostic.GetMessage(CultureInfo.InvariantCulture),
+            string.IsNullOrEmpty(help) ? null : help, diagnostic.Descriptor.Title.ToString(CultureInfo.InvariantCulture),
+            span.Path, span.StartLinePosition.Line + 1);
+    }
+
+    /// <summary>The SDK each options type belongs to, by the short name requests carry (<c>ChatOptions</c> → Microsoft.Extensions.AI).</summary>
+    private static Dictionary<string, string> Libraries(IEnumerable<SurfaceDefinition> surfaces)
+    {
+        var libraries = new Dictionary<string, string>(StringComparer.Ordinal) { ["JSON payload"] = "hand-built JSON" };
+        foreach (var surface in surfaces)
+        {
+            libraries.TryAdd(surface.ShortName, LibraryOf(surface.MetadataName));
+        }
+
+        return libraries;
+    }
+
+    private static readonly string[] KnownLibraries =
+    {
+        "Microsoft.Extensions.AI", "Microsoft.SemanticKernel", "Microsoft.Agents.AI", "Microsoft.ML.OnnxRuntimeGenAI", "Azure.AI.Inference",
+        "Azure.AI.OpenAI", "Betalgo.Ranul.OpenAI", "OpenAI", "OllamaSharp", "Anthropic", "LLama",
+    };
+
+    private static string LibraryOf(string metadataName)
+    {
+        foreach (var library in KnownLibraries)
+        {
+            if (metadataName.StartsWith(library + ".", StringComparison.Ordinal))
+            {
+                return library == "LLama" ? "LLamaSharp" : library;
+            }
+        }
+
+        var parts = metadataName.Split('.');
+        return parts.Length > 2 ? parts[0] + "." + parts[1] : parts[0];
     }
 
     private static (string, int) Key(Location location) => (location.SourceTree?.FilePath ?? string.Empty, location.SourceSpan.Start);
