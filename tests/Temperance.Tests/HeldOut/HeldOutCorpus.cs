@@ -1,3 +1,5 @@
+using static Temperance.Tests.Precision.ExpectedFinding;
+using static Temperance.Tests.Precision.PrecisionCase;
 using Temperance.Tests.Precision;
 
 namespace Temperance.Tests.HeldOut;
@@ -29,14 +31,6 @@ public static class HeldOutCorpus
     public static IReadOnlyList<PrecisionCase> Cases { get; } = Build();
 
     public static PrecisionCase Find(string name) => Cases.Single(c => c.Name == name);
-
-    private static PrecisionCase Silent(string name, string assembly, params string[] sources) =>
-        new(name, assembly, sources, Array.Empty<ExpectedFinding>(), Array.Empty<string>());
-
-    private static PrecisionCase Fires(string name, string assembly, ExpectedFinding[] expected, params string[] sources) =>
-        new(name, assembly, sources, expected, Array.Empty<string>());
-
-    private static ExpectedFinding At(string id, string lineContains) => new(id, lineContains);
 
     private static IReadOnlyList<PrecisionCase> Build()
     {

@@ -1,8 +1,13 @@
+using static Temperance.Tests.Precision.ExpectedFinding;
+using static Temperance.Tests.Precision.PrecisionCase;
+
 namespace Temperance.Tests.Precision;
 
 /// <summary>One finding a case must produce: the rule and a piece of the source line it is reported on.</summary>
 public sealed record ExpectedFinding(string Id, string LineContains)
 {
+    public static ExpectedFinding At(string id, string lineContains) => new(id, lineContains);
+
     public override string ToString() => $"{Id} on a line containing '{LineContains}'";
 }
 
@@ -19,6 +24,14 @@ public sealed record PrecisionCase(
 {
     public bool IsSilent => Expected.Count == 0;
 
+    /// <summary>A case that must report nothing.</summary>
+    public static PrecisionCase Silent(string name, string assembly, params string[] sources) =>
+        new(name, assembly, sources, Array.Empty<ExpectedFinding>(), Array.Empty<string>());
+
+    /// <summary>A case that must report exactly <paramref name="expected"/>.</summary>
+    public static PrecisionCase Fires(string name, string assembly, ExpectedFinding[] expected, params string[] sources) =>
+        new(name, assembly, sources, expected, Array.Empty<string>());
+
     public override string ToString() => Name;
 }
 
@@ -32,14 +45,6 @@ public static class PrecisionCorpus
     public static IReadOnlyList<PrecisionCase> Cases { get; } = Build();
 
     public static PrecisionCase Find(string name) => Cases.Single(c => c.Name == name);
-
-    private static PrecisionCase Silent(string name, string assembly, params string[] sources) =>
-        new(name, assembly, sources, Array.Empty<ExpectedFinding>(), Array.Empty<string>());
-
-    private static PrecisionCase Fires(string name, string assembly, ExpectedFinding[] expected, params string[] sources) =>
-        new(name, assembly, sources, expected, Array.Empty<string>());
-
-    private static ExpectedFinding At(string id, string lineContains) => new(id, lineContains);
 
     private static IReadOnlyList<PrecisionCase> Build()
     {
