@@ -13,7 +13,8 @@ namespace Temperance.Extraction
     /// helper methods, adapters and builders (<c>AsIChatClient()</c>, <c>new ChatClientBuilder(inner)</c>) and the
     /// arguments it was built from (an <c>HttpClient</c> over a handler, a pipeline transport). Doubles are: mocking
     /// libraries' proxies and in-process test servers anywhere; in test code also classes declared in the project that
-    /// act as the client or its transport (a decorator that wraps a real client is not one).
+    /// act as the client or its transport (a decorator that wraps a real client is not one); in product code a client
+    /// class of the project that holds no model client (a chat interface over some other service).
     /// </summary>
     internal sealed class TestDoubles
     {
@@ -123,9 +124,18 @@ namespace Temperance.Extraction
                 return $"the in-process test server ({named.Name})";
             }
 
-            if (!inTestCode || named.TypeKind != TypeKind.Class || !named.Locations.Any(l => l.IsInSource))
+            if (named.TypeKind != TypeKind.Class || !named.Locations.Any(l => l.IsInSource))
             {
                 return null;
+            }
+
+            if (!inTestCode)
+            {
+                // Product code has real clients of its own; one that holds no model client (no SDK client, no IChatClient,
+                // no HttpClient) wraps some other service and reaches no model.
+                return ActsAsClient(named) && !IsDecorator(named) && !HoldsAModelClient(named)
+                    ? $"'{named.Name}', a client of this project that holds no model client"
+                    : null;
             }
 
             if (DerivesFromAny(named, TestingSurfaces.TransportBaseTypes))
@@ -151,6 +161,36 @@ namespace Temperance.Extraction
 
             return type.AllInterfaces.Any(catalog.IsClientType);
         }
+
+        /// <summary>
+        /// A field, property or constructor parameter whose type is a client (IChatClient, an SDK client) or an HttpClient
+        /// (a hand-written client over HTTP may well call a model): then the class may reach a model.
+        /// </summary>
+        private bool HoldsAModelClient(INamedTypeSymbol type)
+        {
+            bool IsModelClient(ITypeSymbol? candidate) =>
+                candidate is INamedTypeSymbol named && named.SpecialType == SpecialType.None
+                && (named.Name == "HttpClient" || catalog.IsClientType(named) || ActsAsClientType(named));
+
+            foreach (var member in type.GetMembers())
+            {
+                var memberType = member switch
+                {
+                    IFieldSymbol field => field.Type,
+                    IPropertySymbol property => property.Type,
+                    _ => null,
+                };
+                if (IsModelClient(memberType))
+                {
+                    return true;
+                }
+            }
+
+            return type.InstanceConstructors.Any(c => c.Parameters.Any(p => IsModelClient(p.Type)));
+        }
+
+        private bool ActsAsClientType(INamedTypeSymbol type) =>
+            type.AllInterfaces.Any(catalog.IsClientType) || (type.BaseType != null && type.BaseType.SpecialType == SpecialType.None && catalog.IsClientType(type.BaseType));
 
         private static bool DerivesFromDelegatingHandler(INamedTypeSymbol type)
         {

@@ -92,7 +92,7 @@ namespace Temperance.Model
 
         /// <summary>Why a request is not judged, for the inventory; null when it is.</summary>
         public string? SilentBecause =>
-            TestDouble != null ? "sent to a test double: " + TestDouble
+            TestDouble != null ? (Context.InTestCode ? "sent to a test double: " : "sent to a client that reaches no model: ") + TestDouble
             : Reach == Reach.NotSent ? "never sent to a model" + (ReachNote == null ? string.Empty : $" ({ReachNote})")
             : Reach == Reach.Escapes && Context.InTestCode ? $"test code that never sends it ({ReachNote})"
             : null;

@@ -263,4 +263,72 @@ public class TestDoubleTests
             }
             """);
     }
+
+    [Fact]
+    public async Task ProductClientOverANonGenerativeService_IsSilent_ButADecoratorOfARealClientTriggers()
+    {
+        // A chat interface the team put over its tide tables samples nothing; a logging decorator over OpenAI does.
+        await Verify.ProjectAsync(new[]
+        {
+            """
+            using System;
+            using System.Collections.Generic;
+            using System.Runtime.CompilerServices;
+            using System.Threading;
+            using System.Threading.Tasks;
+            using Microsoft.Extensions.AI;
+
+            namespace Ferry.Desk;
+
+            public sealed class TideTable
+            {
+                public string HighWater(string port) => port + ": 09:40";
+            }
+
+            public sealed class TideTableChatClient : IChatClient
+            {
+                private readonly TideTable table;
+
+                public TideTableChatClient(TideTable table) => this.table = table;
+
+                public Task<ChatResponse> GetResponseAsync(IEnumerable<ChatMessage> messages, ChatOptions? options = null, CancellationToken cancellationToken = default) =>
+                    Task.FromResult(new ChatResponse(new ChatMessage(ChatRole.Assistant, table.HighWater("Farrow"))));
+
+                public async IAsyncEnumerable<ChatResponseUpdate> GetStreamingResponseAsync(IEnumerable<ChatMessage> messages, ChatOptions? options = null,
+                    [EnumeratorCancellation] CancellationToken cancellationToken = default)
+                {
+                    await Task.Yield();
+                    yield return new ChatResponseUpdate(ChatRole.Assistant, table.HighWater("Farrow"));
+                }
+
+                public object? GetService(Type serviceType, object? serviceKey = null) => null;
+
+                public void Dispose() { }
+            }
+
+            public sealed class LoggingChatClient : DelegatingChatClient
+            {
+                public LoggingChatClient(IChatClient inner) : base(inner) { }
+            }
+            """,
+            """
+            using System.ClientModel;
+            using System.Threading.Tasks;
+            using Microsoft.Extensions.AI;
+            using OpenAI.Chat;
+
+            namespace Ferry.Desk;
+
+            public class Desk
+            {
+                private readonly IChatClient tides = new TideTableChatClient(new TideTable());
+                private readonly IChatClient live = new LoggingChatClient(new ChatClient("gpt-4o-mini", new ApiKeyCredential("key")).AsIChatClient());
+
+                public Task<ChatResponse> HighWater(string question) => tides.GetResponseAsync(question, new ChatOptions { Temperature = 1.9f });
+
+                public Task<ChatResponse> Chat(string question) => live.GetResponseAsync(question, new ChatOptions { {|SAMP009:Temperature = 1.9f|} });
+            }
+            """,
+        }, null);
+    }
 }
