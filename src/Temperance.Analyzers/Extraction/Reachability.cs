@@ -256,23 +256,29 @@ namespace Temperance.Extraction
         {
             for (var current = send.Parent; current != null; current = current.Parent)
             {
-                if (current is IAnonymousFunctionOperation lambda)
+                // The lambda's delegate creation, or the conversion around it, has the Expression<T> type.
+                if (current is IAnonymousFunctionOperation { Parent: { } converted }
+                    && (IsExpressionTree(converted.Type) || IsExpressionTree(converted.Parent?.Type)))
                 {
-                    var converted = lambda.Parent is IDelegateCreationOperation delegateCreation ? delegateCreation.Parent : lambda.Parent;
-                    if (converted is IConversionOperation { Type: INamedTypeSymbol { Name: "Expression", ContainingNamespace: { } ns } } && ns.ToDisplayString() == "System.Linq.Expressions")
-                    {
-                        return true;
-                    }
-
-                    if ((lambda.Parent as IDelegateCreationOperation)?.Type is INamedTypeSymbol { Name: "Expression" } expressionType
-                        && expressionType.ContainingNamespace?.ToDisplayString() == "System.Linq.Expressions")
-                    {
-                        return true;
-                    }
+                    return true;
                 }
             }
 
             return false;
+        }
+
+        private static bool IsExpressionTree(ITypeSymbol? type) =>
+            type is INamedTypeSymbol { Name: "Expression" } expression && expression.ContainingNamespace?.ToDisplayString() == "System.Linq.Expressions";
+
+        /// <summary>The outermost operation of the body an operation belongs to.</summary>
+        internal static IOperation Root(IOperation operation)
+        {
+            while (operation.Parent != null)
+            {
+                operation = operation.Parent;
+            }
+
+            return operation;
         }
 
         /// <summary>

@@ -215,13 +215,8 @@ namespace Temperance.Extraction
             if (request.TestDouble == null && innerSend != null)
             {
                 // Sent through a helper of this file: the helper's own client decides.
-                var root = innerSend;
-                while (root.Parent != null)
-                {
-                    root = root.Parent;
-                }
-
-                request.TestDouble = new TestDoubles(catalog, root.DescendantsAndSelf().ToList(), context.InTestCode).Describe(ClientOf(innerSend));
+                var helperBody = Reachability.Root(innerSend).DescendantsAndSelf().ToList();
+                request.TestDouble = new TestDoubles(catalog, helperBody, context.InTestCode).Describe(ClientOf(innerSend));
             }
 
             return send;

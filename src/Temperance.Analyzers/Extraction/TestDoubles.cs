@@ -170,7 +170,7 @@ namespace Temperance.Extraction
         {
             bool IsModelClient(ITypeSymbol? candidate) =>
                 candidate is INamedTypeSymbol named && named.SpecialType == SpecialType.None
-                && (named.Name == "HttpClient" || catalog.IsClientType(named) || ActsAsClientType(named));
+                && (named.Name == "HttpClient" || catalog.IsClientType(named) || ActsAsClient(named));
 
             foreach (var member in type.GetMembers())
             {
@@ -188,9 +188,6 @@ namespace Temperance.Extraction
 
             return type.InstanceConstructors.Any(c => c.Parameters.Any(p => IsModelClient(p.Type)));
         }
-
-        private bool ActsAsClientType(INamedTypeSymbol type) =>
-            type.AllInterfaces.Any(catalog.IsClientType) || (type.BaseType != null && type.BaseType.SpecialType == SpecialType.None && catalog.IsClientType(type.BaseType));
 
         private static bool DerivesFromDelegatingHandler(INamedTypeSymbol type)
         {
@@ -317,8 +314,8 @@ namespace Temperance.Extraction
                 return null;
             }
 
-            var top = Root(reference);
-            var body = operations.Count > 0 && ReferenceEquals(Root(operations[0]), top) ? operations : top.DescendantsAndSelf().ToList();
+            var top = Reachability.Root(reference);
+            var body = operations.Count > 0 && ReferenceEquals(Reachability.Root(operations[0]), top) ? operations : top.DescendantsAndSelf().ToList();
             foreach (var operation in body)
             {
                 var found = operation switch
@@ -337,16 +334,6 @@ namespace Temperance.Extraction
             }
 
             return null;
-        }
-
-        private static IOperation Root(IOperation operation)
-        {
-            while (operation.Parent != null)
-            {
-                operation = operation.Parent;
-            }
-
-            return operation;
         }
 
         private static IOperation? ReceiverOf(IInvocationOperation call) =>

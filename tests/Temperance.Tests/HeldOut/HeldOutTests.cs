@@ -16,19 +16,7 @@ public class HeldOutTests
 
     public HeldOutTests(ITestOutputHelper output) => this.output = output;
 
-    public static TheoryData<string> CaseNames
-    {
-        get
-        {
-            var names = new TheoryData<string>();
-            foreach (var @case in HeldOutCorpus.Cases)
-            {
-                names.Add(@case.Name);
-            }
-
-            return names;
-        }
-    }
+    public static TheoryData<string> CaseNames => PrecisionCase.Names(HeldOutCorpus.Cases);
 
     [Theory]
     [MemberData(nameof(CaseNames))]

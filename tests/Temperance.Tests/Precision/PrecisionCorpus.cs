@@ -24,6 +24,18 @@ public sealed record PrecisionCase(
 {
     public bool IsSilent => Expected.Count == 0;
 
+    /// <summary>The names of a corpus's cases, as theory data (cases are looked up by name so test names stay readable).</summary>
+    public static Xunit.TheoryData<string> Names(IEnumerable<PrecisionCase> cases)
+    {
+        var names = new Xunit.TheoryData<string>();
+        foreach (var @case in cases)
+        {
+            names.Add(@case.Name);
+        }
+
+        return names;
+    }
+
     /// <summary>A case that must report nothing.</summary>
     public static PrecisionCase Silent(string name, string assembly, params string[] sources) =>
         new(name, assembly, sources, Array.Empty<ExpectedFinding>(), Array.Empty<string>());

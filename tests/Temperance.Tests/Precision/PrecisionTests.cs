@@ -22,19 +22,7 @@ public class PrecisionTests
 
     public PrecisionTests(ITestOutputHelper output) => this.output = output;
 
-    public static TheoryData<string> CaseNames
-    {
-        get
-        {
-            var names = new TheoryData<string>();
-            foreach (var @case in PrecisionCorpus.Cases)
-            {
-                names.Add(@case.Name);
-            }
-
-            return names;
-        }
-    }
+    public static TheoryData<string> CaseNames => PrecisionCase.Names(PrecisionCorpus.Cases);
 
     [Theory]
     [MemberData(nameof(CaseNames))]
