@@ -124,38 +124,36 @@ namespace Temperance
             return symbol;
         }
 
-        private static void Judge(IReadOnlyList<Request> requests, TreeState state, System.Action<Diagnostic> report)
+        private static void Judge(IReadOnlyList<ExtractedRequest> requests, TreeState state, System.Action<Diagnostic> report)
         {
             var reported = new HashSet<(string, Location)>();
-            foreach (var request in requests)
+            foreach (var extracted in requests)
             {
+                var request = extracted.Request;
                 if (!request.IsJudged)
                 {
                     continue; // never reaches a model (Request.SilentBecause says why)
                 }
 
-                foreach (var rule in Rules.RuleSet.All)
+                foreach (var found in Rules.RuleSet.Judge(new RuleInput(extracted, state.Policy)))
                 {
-                    foreach (var found in rule(request, state.Policy))
+                    var finding = found;
+                    if (request.BorrowedFrom != null)
                     {
-                        var finding = found;
-                        if (request.BorrowedFrom != null)
+                        if (!Rules.RuleSet.DependsOnCallSite(finding.Descriptor))
                         {
-                            if (!Rules.RuleSet.DependsOnCallSite(finding.Descriptor))
-                            {
-                                continue;
-                            }
-
-                            // A value written in the helper is reported where this call sends it.
-                            finding = finding.Location == request.SendingCallLocation ? finding : finding.At(request.Location);
+                            continue;
                         }
 
-                        // Clone and with inherit writes; a location is judged once. Code under #line hidden is generated
-                        // (Razor, T4) and silent, as the driver would have made it (GeneratedCode.cs says why we decide).
-                        if (!GeneratedCode.IsHidden(finding.Location) && reported.Add((finding.Descriptor.Id, finding.Location)))
-                        {
-                            report(finding.ToDiagnostic());
-                        }
+                        // A value written in the helper is reported where this call sends it.
+                        finding = finding.Location == request.SendingCallLocation ? finding : finding.At(request.Location);
+                    }
+
+                    // Clone and with inherit writes; a location is judged once. Code under #line hidden is generated
+                    // (Razor, T4) and silent, as the driver would have made it (GeneratedCode.cs says why we decide).
+                    if (!GeneratedCode.IsHidden(finding.Location) && reported.Add((finding.Descriptor.Id, finding.Location)))
+                    {
+                        report(finding.ToDiagnostic());
                     }
                 }
             }
@@ -165,7 +163,7 @@ namespace Temperance
             {
                 if (state.FirstReport(problem.Key))
                 {
-                    report(Diagnostic.Create(Descriptors.InvalidConfiguration, requests[0].Location, problem.Key, problem.Value, problem.Expected));
+                    report(Diagnostic.Create(Descriptors.InvalidConfiguration, requests[0].Request.Location, problem.Key, problem.Value, problem.Expected));
                 }
             }
         }

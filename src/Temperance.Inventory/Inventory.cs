@@ -80,7 +80,7 @@ public static class Inventory
                 }
 
                 var context = tests.ContextOf(owner, policy.TestAttributes);
-                foreach (var request in RequestBuilder.Build(catalog, context, collector, new[] { operation }))
+                foreach (var request in RequestBuilder.Build(catalog, context, collector, new[] { operation }).Select(r => r.Request))
                 {
                     rows.Add(Row(project, request, policy, diagnostics, ModelOf, libraries));
                 }
@@ -98,7 +98,8 @@ public static class Inventory
         var settings = new List<SettingRow>();
         foreach (var setting in Reported)
         {
-            var kind = request.KindOf(setting, out var value);
+            var effective = request.Value(setting);
+            var (kind, value) = (effective.Kind, effective.Value);
             var last = request.LastWrite(setting);
             var name = setting.KeyName();
             settings.Add(kind switch

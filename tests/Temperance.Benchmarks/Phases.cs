@@ -51,7 +51,7 @@ public static class Phases
             walkBytes = GC.GetAllocatedBytesForCurrentThread() - allocated;
             allocated = GC.GetAllocatedBytesForCurrentThread();
             watch.Restart();
-            var requests = new List<(Request Request, SyntaxTree Tree)>();
+            var requests = new List<(ExtractedRequest Request, SyntaxTree Tree)>();
             foreach (var (collector, block, owner, tree) in collected)
             {
                 var context = new CallContext(owner, owner?.ContainingType, tests.IsTest(owner));
@@ -71,13 +71,10 @@ public static class Phases
                     policies[tree] = policy = new TemperancePolicy(table.GetOptions(tree), table.GlobalOptions);
                 }
 
-                foreach (var rule in Temperance.Rules.RuleSet.All)
+                foreach (var finding in Temperance.Rules.RuleSet.Judge(new Temperance.Rules.RuleInput(request, policy)))
                 {
-                    foreach (var finding in rule(request, policy))
-                    {
-                        _ = finding.ToDiagnostic();
-                        reported++;
-                    }
+                    _ = finding.ToDiagnostic();
+                    reported++;
                 }
             }
 

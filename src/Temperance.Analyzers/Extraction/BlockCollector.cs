@@ -134,7 +134,7 @@ namespace Temperance.Extraction
                 return true; // SetSearchOption, SetGuidance, Clone …
             }
 
-            if (IsSerialisationType(method.ContainingType) || (method.Name == "Add" && invocation.Instance != null && catalog.IsPayloadType(invocation.Instance.Type)))
+            if (PayloadReader.IsSerialisation(method) || (method.Name == "Add" && invocation.Instance != null && catalog.IsPayloadType(invocation.Instance.Type)))
             {
                 return true;
             }
@@ -148,22 +148,6 @@ namespace Temperance.Extraction
             }
 
             return catalog.SurfaceSentBy(method) != null;
-        }
-
-        /// <summary>Methods that send or serialise a hand-built JSON payload.</summary>
-        public static bool IsSerialisation(IMethodSymbol method) => IsSerialisationType(method.ContainingType);
-
-        private static bool IsSerialisationType(INamedTypeSymbol? type)
-        {
-            if (type?.Name is not ("HttpClientJsonExtensions" or "JsonSerializer" or "JsonContent" or "JsonConvert" or "JsonNode" or "JsonObject"))
-            {
-                return false;
-            }
-
-            var ns = type.ContainingNamespace?.ToDisplayString() ?? string.Empty;
-            return ns.StartsWith("System.Net.Http.Json", System.StringComparison.Ordinal)
-                || ns.StartsWith("System.Text.Json", System.StringComparison.Ordinal)
-                || ns.StartsWith("Newtonsoft.Json", System.StringComparison.Ordinal);
         }
     }
 }

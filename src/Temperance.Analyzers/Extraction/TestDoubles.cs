@@ -170,7 +170,7 @@ namespace Temperance.Extraction
         {
             bool IsModelClient(ITypeSymbol? candidate) =>
                 candidate is INamedTypeSymbol named && named.SpecialType == SpecialType.None
-                && (named.Name == "HttpClient" || catalog.IsClientType(named) || ActsAsClient(named));
+                && (SurfaceCatalog.FullName(named) == TestingSurfaces.HttpClientType || catalog.IsClientType(named) || ActsAsClient(named));
 
             foreach (var member in type.GetMembers())
             {
@@ -193,7 +193,7 @@ namespace Temperance.Extraction
         {
             for (var current = type.BaseType; current != null; current = current.BaseType)
             {
-                if (current.Name == "DelegatingHandler" && current.ContainingNamespace?.ToDisplayString() == "System.Net.Http")
+                if (SurfaceCatalog.FullName(current) == TestingSurfaces.DelegatingHandlerType)
                 {
                     return true;
                 }
@@ -214,7 +214,7 @@ namespace Temperance.Extraction
             }
 
             var inner = creation.Arguments.Any(a => a.ArgumentKind == ArgumentKind.Explicit)
-                || (creation.Initializer?.Initializers.Any(i => i is ISimpleAssignmentOperation { Target: IPropertyReferenceOperation { Property.Name: "InnerHandler" } }) ?? false);
+                || (creation.Initializer?.Initializers.Any(i => i is ISimpleAssignmentOperation { Target: IPropertyReferenceOperation { Property.Name: TestingSurfaces.InnerHandlerMember } }) ?? false);
             return inner ? null : $"'{type.Name}', a handler declared in this project that answers instead of a model";
         }
 
@@ -223,7 +223,7 @@ namespace Temperance.Extraction
         {
             for (var current = type.BaseType; current != null; current = current.BaseType)
             {
-                if (current.Name == "DelegatingChatClient" && !current.Locations.Any(l => l.IsInSource))
+                if (TestingSurfaces.DecoratorBaseTypes.Contains(SurfaceCatalog.FullName(current.OriginalDefinition)) && !current.Locations.Any(l => l.IsInSource))
                 {
                     return true;
                 }
@@ -417,9 +417,9 @@ namespace Temperance.Extraction
                             IdentifierNameSyntax identifier => identifier.Identifier.ValueText,
                             _ => null,
                         };
-                        if (name == "Mock")
+                        if (name == TestingSurfaces.MockType)
                         {
-                            return "a Moq double (Mock)";
+                            return $"a mocking library's double ({TestingSurfaces.MockType})";
                         }
 
                         if (name != null && compilation != null)
@@ -435,7 +435,7 @@ namespace Temperance.Extraction
 
                         break;
                     case InvocationExpressionSyntax { Expression: MemberAccessExpressionSyntax { Expression: IdentifierNameSyntax owner } access }
-                        when (owner.Identifier.ValueText, access.Name.Identifier.ValueText) is ("Substitute", "For") or ("A", "Fake") or ("Mock", "Of"):
+                        when TestingSurfaces.MockFactories.Contains((owner.Identifier.ValueText, access.Name.Identifier.ValueText)):
                         return $"a mocking library's double ({owner.Identifier.ValueText}.{access.Name.Identifier.ValueText})";
                 }
             }

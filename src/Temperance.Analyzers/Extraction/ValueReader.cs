@@ -50,7 +50,7 @@ namespace Temperance.Extraction
                 return text;
             }
 
-            // Anthropic's Model is an ApiEnum built by an implicit conversion from string.
+            // A model id wrapped by an implicit conversion from string (an SDK's string enum).
             if (operation is IConversionOperation { Operand: var operand } && operand.ConstantValue is { HasValue: true, Value: string inner })
             {
                 return inner;
@@ -65,7 +65,7 @@ namespace Temperance.Extraction
             {
                 switch (operation)
                 {
-                    case IConversionOperation conversion when conversion.Operand.ConstantValue.HasValue || IsNumericOrNullable(conversion.Type) || conversion.IsImplicit:
+                    case IConversionOperation conversion when conversion.Operand.ConstantValue.HasValue || TypeFacts.IsNumber(conversion.Type) || conversion.IsImplicit:
                         operation = conversion.Operand;
                         continue;
                     case IParenthesizedOperation parenthesized:
@@ -134,13 +134,24 @@ namespace Temperance.Extraction
                     origin = $"static readonly '{field.Name}'";
                     return true;
                 // BinaryData.FromObjectAsJson(40), JsonValue.Create(0.2): the payload value is the argument.
-                case IInvocationOperation { Arguments.Length: >= 1 } call
-                    when call.TargetMethod.Name is "FromObjectAsJson" or "Create" && call.TargetMethod.IsStatic
-                        && call.TargetMethod.ContainingType?.Name is "BinaryData" or "JsonValue":
+                case IInvocationOperation { Arguments.Length: >= 1, TargetMethod.IsStatic: true } call when IsValueWrapper(call.TargetMethod):
                     return TryGetNumber(call.Arguments[0].Value, out number, out origin);
                 default:
                     return false;
             }
+        }
+
+        private static bool IsValueWrapper(IMethodSymbol method)
+        {
+            foreach (var (type, name) in Surfaces.RawJsonSurface.ValueWrappers)
+            {
+                if (method.Name == name && method.ContainingType?.Name == type)
+                {
+                    return true;
+                }
+            }
+
+            return false;
         }
 
         /// <summary>
@@ -204,21 +215,10 @@ namespace Temperance.Extraction
             }
         }
 
-        private static bool IsNumericOrNullable(ITypeSymbol? type)
-        {
-            if (type is INamedTypeSymbol { OriginalDefinition.SpecialType: SpecialType.System_Nullable_T } nullable)
-            {
-                type = nullable.TypeArguments[0];
-            }
-
-            return type?.SpecialType is SpecialType.System_Double or SpecialType.System_Single or SpecialType.System_Decimal
-                or SpecialType.System_Int32 or SpecialType.System_Int64 or SpecialType.System_UInt32;
-        }
-
         /// <summary>The literal type a fix must write: the member's type, or the value's own type for object-typed bags.</summary>
         private static NumericKind NumericKindOf(ITypeSymbol? targetType, IOperation value, Setting setting)
         {
-            if (FromType(targetType) is { } fromTarget)
+            if (TypeFacts.NumericKindOf(targetType) is { } fromTarget)
             {
                 return fromTarget;
             }
@@ -229,34 +229,13 @@ namespace Temperance.Extraction
                 operand = conversion.Operand;
             }
 
-            return FromType(operand.Type) switch
+            return TypeFacts.NumericKindOf(operand.Type) switch
             {
                 NumericKind.Float => NumericKind.Float,
                 NumericKind.Decimal => NumericKind.Decimal,
                 // Counts stay integers in a JSON bag ("n": 1, not 1.0); other integers become doubles so fractions stay valid.
-                NumericKind.Int or NumericKind.Long when setting is Setting.Candidates or Setting.TopK or Setting.Seed => FromType(operand.Type)!.Value,
+                NumericKind.Int or NumericKind.Long when setting is Setting.Candidates or Setting.TopK or Setting.Seed => TypeFacts.NumericKindOf(operand.Type)!.Value,
                 _ => NumericKind.Double,
-            };
-        }
-
-        public static NumericKind? KindOfType(ITypeSymbol? type) => FromType(type);
-
-        private static NumericKind? FromType(ITypeSymbol? type)
-        {
-            if (type is INamedTypeSymbol { OriginalDefinition.SpecialType: SpecialType.System_Nullable_T } nullable)
-            {
-                type = nullable.TypeArguments[0];
-            }
-
-            return type?.SpecialType switch
-            {
-                SpecialType.System_Double => NumericKind.Double,
-                SpecialType.System_Single => NumericKind.Float,
-                SpecialType.System_Decimal => NumericKind.Decimal,
-                SpecialType.System_Int32 => NumericKind.Int,
-                SpecialType.System_Int64 => NumericKind.Long,
-                SpecialType.System_UInt32 => NumericKind.UInt,
-                _ => (NumericKind?)null,
             };
         }
     }

@@ -123,7 +123,7 @@ namespace Temperance.Policy
                     continue;
                 }
 
-                if (Property(type, member) is { SetMethod: not null } property && IsNumber(property.Type))
+                if (TypeFacts.FindProperty(type, member) is { SetMethod: not null } property && TypeFacts.IsNumber(property.Type))
                 {
                     surface.Map(member, SettingNames.Parse(settingKey == "candidates" ? "candidates" : settingKey)!.Value);
                 }
@@ -135,7 +135,7 @@ namespace Temperance.Policy
 
             if (values.TryGetValue(Key("model"), out var model))
             {
-                if (Property(type, model) is { Type.SpecialType: SpecialType.System_String })
+                if (TypeFacts.FindProperty(type, model) is { Type.SpecialType: SpecialType.System_String })
                 {
                     surface.ModelMember = model;
                 }
@@ -147,7 +147,7 @@ namespace Temperance.Policy
 
             if (values.TryGetValue(Key("response_format"), out var format))
             {
-                if (Property(type, format) != null)
+                if (TypeFacts.FindProperty(type, format) != null)
                 {
                     surface.ResponseFormatMember = format;
                 }
@@ -187,30 +187,6 @@ namespace Temperance.Policy
 
                 surface.Sends(entry.Substring(0, dot), method);
             }
-        }
-
-        private static IPropertySymbol? Property(ITypeSymbol type, string name)
-        {
-            for (var current = type; current != null; current = current.BaseType)
-            {
-                if (current.GetMembers(name).OfType<IPropertySymbol>().FirstOrDefault() is { } property)
-                {
-                    return property;
-                }
-            }
-
-            return null;
-        }
-
-        private static bool IsNumber(ITypeSymbol type)
-        {
-            if (type is INamedTypeSymbol { OriginalDefinition.SpecialType: SpecialType.System_Nullable_T } nullable)
-            {
-                type = nullable.TypeArguments[0];
-            }
-
-            return type.SpecialType is SpecialType.System_Double or SpecialType.System_Single or SpecialType.System_Decimal
-                or SpecialType.System_Int32 or SpecialType.System_Int64 or SpecialType.System_UInt32;
         }
     }
 }

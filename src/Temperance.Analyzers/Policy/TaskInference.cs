@@ -13,19 +13,8 @@ namespace Temperance.Policy
     {
         private static readonly HashSet<string> StructuredKinds = new HashSet<string> { "classification", "evaluation", "code", "tool_use", "extraction" };
 
-        /// <summary>The request's task, computed once: several rules ask.</summary>
+        /// <summary>The request's task under a policy (rules read it once per request through <c>RuleInput.Task</c>).</summary>
         public static TaskEvidence? Infer(Request request, TemperancePolicy policy)
-        {
-            if (!request.TaskInferred)
-            {
-                request.InferredTask = Compute(request, policy);
-                request.TaskInferred = true;
-            }
-
-            return request.InferredTask;
-        }
-
-        private static TaskEvidence? Compute(Request request, TemperancePolicy policy)
         {
             if (policy.TaskKindInvalid)
             {

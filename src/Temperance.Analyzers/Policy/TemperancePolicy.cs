@@ -91,6 +91,30 @@ namespace Temperance.Policy
 
         public Limit? Default(string provider, Setting setting) => Lookup(provider, setting, "default");
 
+        /// <summary>
+        /// The accepted range of a setting for a provider; an open end is null. Null when the table gives no bound, or when
+        /// its bounds are inverted: that is a configuration error (reported here as SAMP100, both keys named), not a reason
+        /// to warn on code.
+        /// </summary>
+        public (Limit? Min, Limit? Max)? Range(string provider, Setting setting)
+        {
+            var min = Min(provider, setting);
+            var max = Max(provider, setting);
+            if (min == null && max == null)
+            {
+                return null;
+            }
+
+            if (min != null && max != null && min.Value.Value > max.Value.Value)
+            {
+                AddProblem(new ConfigProblem(min.Value.Key, min.Value.Value.ToString(CultureInfo.InvariantCulture),
+                    $"a value no greater than '{max.Value.Key}' ({max.Value.Value.ToString(CultureInfo.InvariantCulture)})"));
+                return null;
+            }
+
+            return (min, max);
+        }
+
         /// <summary>The temperature fixes write for a task (<c>temperance.task.&lt;kind&gt;.temperature</c>).</summary>
         public Limit? TaskTemperatureOf(string kind) => Lookup(kind, Setting.Temperature, TaskTemperatureBound);
 
@@ -317,11 +341,6 @@ namespace Temperance.Policy
             AddProblem(new ConfigProblem(key, raw, "true or false"));
             return null;
         }
-
-        /// <summary>A min above its max: both keys are named so the team sees which pair is wrong.</summary>
-        public void ReportInvertedRange(Limit min, Limit max) =>
-            AddProblem(new ConfigProblem(min.Key, min.Value.ToString(CultureInfo.InvariantCulture),
-                $"a value no greater than '{max.Key}' ({max.Value.ToString(CultureInfo.InvariantCulture)})"));
 
         public bool TryGetRaw(string key, out string value)
         {

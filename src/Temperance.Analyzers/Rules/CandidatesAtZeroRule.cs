@@ -1,30 +1,28 @@
 using System.Collections.Generic;
-using System.Linq;
 using Temperance.Model;
-using Temperance.Policy;
 
 namespace Temperance.Rules
 {
     /// <summary>SAMP008: more than one candidate at temperature 0, where greedy decoding makes them all the same.</summary>
     internal static class CandidatesAtZeroRule
     {
-        public static IEnumerable<Finding> Evaluate(Request request, TemperancePolicy policy)
+        public static IEnumerable<Finding> Evaluate(RuleInput input)
         {
-            if (request.KindOf(Setting.Candidates, out var candidates) != ValueKind.Known || candidates <= 1
-                || request.KindOf(Setting.Temperature, out var temperature) != ValueKind.Known || temperature != 0)
+            var candidates = input.Request.Value(Setting.Candidates);
+            var temperature = input.Request.Value(Setting.Temperature);
+            if (!candidates.IsKnown || candidates.Value <= 1 || !temperature.Is(0))
             {
                 yield break;
             }
 
-            var candidatesWrite = request.LastWrite(Setting.Candidates)!;
-            var temperatureWrite = request.LastWrite(Setting.Temperature)!;
-            var fix = new FixPlan().SetValue(candidatesWrite, 1);
-            if (policy.CandidatesTemperature is { } raised)
+            var fix = new FixPlan().SetValue(candidates.Last!, 1);
+            if (input.Policy.CandidatesTemperature is { } raised)
             {
-                fix.SetValue(temperatureWrite, raised.Value);
+                fix.SetValue(temperature.Last!, raised.Value);
             }
 
-            yield return new Finding(Descriptors.CandidatesAtTemperatureZero, candidatesWrite.Location, fix, FixProperties.Show(candidates));
+            yield return new Finding(Descriptors.CandidatesAtTemperatureZero, candidates.Last!.Location, fix, FixProperties.Show(candidates.Value))
+                .About(candidates.Last!, temperature.Last!);
         }
     }
 }

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Linq;
 using Microsoft.CodeAnalysis;
 
 namespace Temperance.Rules
@@ -6,7 +7,6 @@ namespace Temperance.Rules
     /// <summary>The catalog of every Temperance diagnostic. One analyzer owns them all, so a request is extracted once.</summary>
     internal static class Descriptors
     {
-        /// <summary>Rule pages live in <c>rules/</c> of the repository; see DEVELOPERS.md (release) before changing it.</summary>
         /// <summary>
         /// The rule pages' address: the repository URL the build was given (<c>TemperanceRepositoryUrl</c> in
         /// Directory.Build.props, stored as assembly metadata) plus <c>/blob/main/rules/</c>.
@@ -94,14 +94,23 @@ namespace Temperance.Rules
 
         /// <summary>
         /// Rules with no known false positives: the relaxed preset keeps only these as warnings while a team adopts the
-        /// package; every other rule becomes a suggestion there. (Range and extreme-value checks judge only constants
-        /// against published limits; SAMP100 judges only configuration.)
+        /// package; every other rule becomes a suggestion there. Derived from <see cref="RuleSet"/> (SAMP100 judges only
+        /// configuration).
         /// </summary>
-        public static readonly ImmutableHashSet<string> NoKnownFalsePositives = ImmutableHashSet.Create("SAMP005", "SAMP009", "SAMP100");
+        public static ImmutableHashSet<string> NoKnownFalsePositives => Derived.NoKnownFalsePositives;
 
-        public static readonly ImmutableArray<DiagnosticDescriptor> All = ImmutableArray.Create(
-            TemperatureAboveTaskCeiling, RandomSamplingInExactTest, MissingSeed, TemperatureAndTopPBothChanged, ValueOutOfRange,
-            InertSetting, SettingRejectedOrDropped, CandidatesAtTemperatureZero, ExtremeTemperature, InvalidConfiguration);
+        /// <summary>Every descriptor: the rules of <see cref="RuleSet"/> in ID order, then SAMP100.</summary>
+        public static ImmutableArray<DiagnosticDescriptor> All => Derived.All;
+
+        /// <summary>Built on first use, after every descriptor field above exists (RuleSet refers to them).</summary>
+        private static class Derived
+        {
+            public static readonly ImmutableArray<DiagnosticDescriptor> All =
+                RuleSet.All.Select(r => r.Descriptor).OrderBy(d => d.Id, System.StringComparer.Ordinal).Concat(new[] { InvalidConfiguration }).ToImmutableArray();
+
+            public static readonly ImmutableHashSet<string> NoKnownFalsePositives =
+                RuleSet.All.Where(r => r.NoKnownFalsePositives).Select(r => r.Descriptor.Id).Concat(new[] { InvalidConfiguration.Id }).ToImmutableHashSet();
+        }
 
         private static DiagnosticDescriptor Create(string id, string title, string message, string category, DiagnosticSeverity severity, string description, params string[] tags) =>
             new DiagnosticDescriptor(id, title, message, category, severity, isEnabledByDefault: true, description: description, helpLinkUri: HelpLinkBase + id + ".md", customTags: tags);

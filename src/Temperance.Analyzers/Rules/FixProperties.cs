@@ -110,15 +110,15 @@ namespace Temperance.Rules
         /// options object), else as an options argument of a call that passes none. The first setting decides the edit;
         /// the others join it when they belong to the same object. False when there is nowhere to write.
         /// </summary>
-        public bool AddUnset(Request request, params (Setting Setting, double Value)[] settings)
+        public bool AddUnset(FixAnchors anchors, params (Setting Setting, double Value)[] settings)
         {
             var (first, value) = settings[0];
-            if (request.AddTargets.TryGetValue(first, out var target))
+            if (anchors.Members.TryGetValue(first, out var target))
             {
                 AddMember(target.Creation, target.Member, value, target.Kind, target.WrapperMember, target.WrapperType).Experimental(target.Experimental);
                 foreach (var (other, otherValue) in settings.Skip(1))
                 {
-                    if (request.AddTargets.TryGetValue(other, out var more) && more.Creation == target.Creation && more.WrapperMember == target.WrapperMember)
+                    if (anchors.Members.TryGetValue(other, out var more) && more.Creation == target.Creation && more.WrapperMember == target.WrapperMember)
                     {
                         AlsoAssign(more.Member, more.Kind, otherValue, more.Experimental);
                     }
@@ -127,13 +127,13 @@ namespace Temperance.Rules
                 return true;
             }
 
-            if (request.IsImplicit && request.OmittedParameter != null && request.OmittedOptionsType != null && request.SendingCallLocation != null
-                && request.OmittedMembers.TryGetValue(first, out var omitted))
+            if (anchors.Call != null && anchors.OmittedParameter != null && anchors.OmittedOptionsType != null
+                && anchors.OmittedMembers.TryGetValue(first, out var omitted))
             {
-                AddArgument(request.SendingCallLocation, request.OmittedParameter.Name, request.OmittedOptionsType, omitted.Member, value, omitted.Kind).Experimental(omitted.Experimental);
+                AddArgument(anchors.Call, anchors.OmittedParameter, anchors.OmittedOptionsType, omitted.Member, value, omitted.Kind).Experimental(omitted.Experimental);
                 foreach (var (other, otherValue) in settings.Skip(1))
                 {
-                    if (request.OmittedMembers.TryGetValue(other, out var more))
+                    if (anchors.OmittedMembers.TryGetValue(other, out var more))
                     {
                         AlsoAssign(more.Member, more.Kind, otherValue, more.Experimental);
                     }

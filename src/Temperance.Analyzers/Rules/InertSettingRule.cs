@@ -1,80 +1,63 @@
 using System.Collections.Generic;
-using System.Linq;
 using Temperance.Model;
-using Temperance.Policy;
 
 namespace Temperance.Rules
 {
     /// <summary>
     /// SAMP006 (Info): a setting another setting cancels. Temperature 0 is greedy decoding, so truncating the candidate
     /// set (top-p below 1, top-k above 1, min-p above 0) changes nothing; top-k 1 or top-p 0 leaves one token, so
-    /// temperature has nothing to reshape; ONNX <c>do_sample = false</c> is greedy search, so every sampling knob is ignored.
+    /// temperature has nothing to reshape; <c>do_sample = false</c> is greedy search, so every sampling knob is ignored.
     /// </summary>
     internal static class InertSettingRule
     {
         private const string Greedy = "temperature is 0: decoding is greedy and always takes the most likely token";
+        private const string GreedySearch = "do_sample is false: the runtime then runs greedy search and ignores sampling settings";
 
-        public static IEnumerable<Finding> Evaluate(Request request, TemperancePolicy policy)
+        public static IEnumerable<Finding> Evaluate(RuleInput input)
         {
-            var temperature = request.KindOf(Setting.Temperature, out var t);
-            if (temperature == ValueKind.Known && t == 0)
+            var request = input.Request;
+            var temperature = request.Value(Setting.Temperature);
+            var inert = new List<Finding>();
+            if (temperature.Is(0))
             {
-                foreach (var finding in Inert(request, Setting.TopP, v => v < 1, Greedy))
-                {
-                    yield return finding;
-                }
-
-                foreach (var finding in Inert(request, Setting.TopK, v => v > 1, Greedy))
-                {
-                    yield return finding;
-                }
-
-                foreach (var finding in Inert(request, Setting.MinP, v => v > 0, Greedy))
-                {
-                    yield return finding;
-                }
+                Inert(request, Setting.TopP, v => v < 1, Greedy, inert);
+                Inert(request, Setting.TopK, v => v > 1, Greedy, inert);
+                Inert(request, Setting.MinP, v => v > 0, Greedy, inert);
             }
 
-            if (request.KindOf(Setting.TopK, out var k) == ValueKind.Known && k == 1 && temperature == ValueKind.Known && t > 0)
+            if (request.Value(Setting.TopK).Is(1) && temperature.IsKnown && temperature.Value > 0)
             {
-                foreach (var finding in Inert(request, Setting.Temperature, v => v > 0, "top-k is 1: only the single most likely token is left to sample"))
-                {
-                    yield return finding;
-                }
+                Inert(request, Setting.Temperature, v => v > 0, "top-k is 1: only the single most likely token is left to sample", inert);
             }
 
             // top-p 0 keeps only the most likely token (providers treat it as greedy), so temperature has nothing to reshape.
-            if (request.KindOf(Setting.TopP, out var p) == ValueKind.Known && p == 0 && temperature == ValueKind.Known && t > 0)
+            if (request.Value(Setting.TopP).Is(0) && temperature.IsKnown && temperature.Value > 0)
             {
-                foreach (var finding in Inert(request, Setting.Temperature, v => v > 0, "top-p is 0: only the single most likely token is left to sample"))
-                {
-                    yield return finding;
-                }
+                Inert(request, Setting.Temperature, v => v > 0, "top-p is 0: only the single most likely token is left to sample", inert);
             }
 
-            if (request.KindOf(Setting.DoSample, out var sample) == ValueKind.Known && sample == 0)
+            if (request.Value(Setting.DoSample).Is(0))
             {
-                const string Search = "do_sample is false: ONNX Runtime GenAI then runs greedy search and ignores sampling settings";
                 foreach (var setting in new[] { Setting.Temperature, Setting.TopP, Setting.TopK })
                 {
-                    foreach (var finding in Inert(request, setting, _ => true, Search))
-                    {
-                        yield return finding;
-                    }
+                    Inert(request, setting, _ => true, GreedySearch, inert);
                 }
             }
+
+            return inert;
         }
 
-        private static IEnumerable<Finding> Inert(Request request, Setting setting, System.Func<double, bool> inert, string because)
+        private static void Inert(Request request, Setting setting, System.Func<double, bool> inert, string because, List<Finding> found)
         {
-            if (request.KindOf(setting, out var value) != ValueKind.Known || !inert(value))
+            var value = request.Value(setting);
+            if (!value.IsKnown || !inert(value.Value))
             {
-                yield break;
+                return;
             }
 
-            var write = request.LastWrite(setting)!;
-            yield return new Finding(Descriptors.InertSetting, write.Location, new FixPlan().Remove(write),
-                $"{write.Member} = {FixProperties.Show(value)}", because);
+            var write = value.Last!;
+            found.Add(new Finding(Descriptors.InertSetting, write.Location, new FixPlan().Remove(write),
+                $"{write.Member} = {FixProperties.Show(value.Value)}", because).About(write));
         }
     }
 }

@@ -7,42 +7,43 @@ namespace Temperance.Rules
     /// <summary>
     /// SAMP003: no seed where a run must be reproducible: a test comparing exact output at temperature 0, an evaluation
     /// (LLM-as-judge) task, or everywhere with <c>temperance.require_seed = always</c>. Only on surfaces that have a seed.
+    /// A test comparing exact output at a random temperature is SAMP002's (<see cref="Precedence"/>).
     /// </summary>
     internal static class MissingSeedRule
     {
-        public static IEnumerable<Finding> Evaluate(Request request, TemperancePolicy policy)
+        public static IEnumerable<Finding> Evaluate(RuleInput input)
         {
+            var (request, policy) = (input.Request, input.Policy);
             var mode = policy.RequireSeed;
-            if (mode == "never" || !request.SeedAvailable || request.KindOf(Setting.Seed, out _) != ValueKind.Unset)
+            if (mode == "never" || !request.SeedAvailable || request.Value(Setting.Seed).Kind != ValueKind.Unset)
             {
                 yield break;
             }
 
-            var temperatureKind = request.KindOf(Setting.Temperature, out var temperature);
             string? why = null;
-            if (request.Context.IsTest && request.ExactAssertion != null && temperatureKind == ValueKind.Known && temperature == 0)
+            if (request.Context.IsTest && request.ExactAssertion != null && request.Value(Setting.Temperature).Is(0))
             {
                 why = $"the test '{request.ExactAssertionIn ?? request.Context.Member?.Name}' compares its exact output with {request.ExactAssertion}";
             }
-            else if (request.ExactAssertion == null && TaskInference.Infer(request, policy) is { Kind: "evaluation" } task)
+            else if (input.Task is { Kind: "evaluation" } task)
             {
                 why = $"an evaluation task, {task.Because}, must grade the same answer the same way";
             }
-            else if (mode == "always" && !(request.Context.IsTest && request.ExactAssertion != null))
+            else if (mode == "always")
             {
                 why = $"'{OptionKeys.RequireSeed} = always'";
             }
 
             if (why == null)
             {
-                yield break; // in an exact test with random sampling, SAMP002 covers the seed
+                yield break;
             }
 
             // The seed a fix writes comes from temperance.test_seed; when that is not a number (SAMP100) there is no fix.
             var fix = new FixPlan();
             if (!policy.TestSeedInvalid)
             {
-                fix.AddUnset(request, (Setting.Seed, policy.TestSeed?.Value ?? 0));
+                fix.AddUnset(input.Anchors, (Setting.Seed, policy.TestSeed?.Value ?? 0));
             }
 
             yield return new Finding(Descriptors.MissingSeed, request.Location, fix, why, request.Surface);

@@ -1,30 +1,30 @@
 using System.Collections.Generic;
 using Temperance.Model;
-using Temperance.Policy;
 
 namespace Temperance.Rules
 {
     /// <summary>
     /// SAMP002: a test compares the model's exact output while sampling is random (temperature unset or above 0).
-    /// Reported on the request call. Its fix sets temperature 0 and, where the SDK has one, the seed; so a missing seed in
-    /// such a test is this rule's, not SAMP003's.
+    /// Reported on the request call. Its fix sets temperature 0 and, where the SDK has one, the seed; so it stands for a
+    /// missing seed in such a test (<see cref="Precedence"/>).
     /// </summary>
     internal static class RandomSamplingInTestRule
     {
-        public static IEnumerable<Finding> Evaluate(Request request, TemperancePolicy policy)
+        public static IEnumerable<Finding> Evaluate(RuleInput input)
         {
+            var (request, policy) = (input.Request, input.Policy);
             if (!request.Context.IsTest || request.ExactAssertion == null || request.SendingCallLocation == null)
             {
                 yield break;
             }
 
-            var kind = request.KindOf(Setting.Temperature, out var temperature);
+            var temperature = request.Value(Setting.Temperature);
             string why;
-            if (kind == ValueKind.Known && temperature > 0)
+            if (temperature.IsKnown && temperature.Value > 0)
             {
-                why = $"temperature {FixProperties.Show(temperature)}";
+                why = $"temperature {FixProperties.Show(temperature.Value)}";
             }
-            else if (kind == ValueKind.Unset)
+            else if (temperature.Kind == ValueKind.Unset)
             {
                 var providerDefault = policy.Default(request.Provider, Setting.Temperature);
                 why = providerDefault == null ? "temperature unset"
@@ -44,27 +44,26 @@ namespace Temperance.Rules
             var seed = policy.TestSeed?.Value ?? 0;
             var fix = new FixPlan();
             // A test_seed that is not a number is reported (SAMP100); the fix then sets temperature only, never a stand-in seed.
-            var seedUnset = request.KindOf(Setting.Seed, out _) == ValueKind.Unset && request.SeedAvailable && !policy.TestSeedInvalid;
-            if (request.LastWrite(Setting.Temperature) is { } temperatureWrite)
+            var seedUnset = request.Value(Setting.Seed).Kind == ValueKind.Unset && request.SeedAvailable && !policy.TestSeedInvalid;
+            if (temperature.Last is { } temperatureWrite)
             {
                 fix.SetValue(temperatureWrite, 0);
                 if (seedUnset)
                 {
-                    fix.AddUnset(request, (Setting.Seed, seed));
+                    fix.AddUnset(input.Anchors, (Setting.Seed, seed));
                 }
             }
             else if (seedUnset)
             {
-                fix.AddUnset(request, (Setting.Temperature, 0), (Setting.Seed, seed));
+                fix.AddUnset(input.Anchors, (Setting.Temperature, 0), (Setting.Seed, seed));
             }
             else
             {
-                fix.AddUnset(request, (Setting.Temperature, 0));
+                fix.AddUnset(input.Anchors, (Setting.Temperature, 0));
             }
 
             yield return new Finding(Descriptors.RandomSamplingInExactTest, request.SendingCallLocation, fix.Combined(),
                 $"{request.ExactAssertion} in '{request.ExactAssertionIn ?? request.Context.Member?.Name}'", why);
         }
-
     }
 }

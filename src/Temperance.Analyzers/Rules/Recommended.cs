@@ -10,10 +10,9 @@ namespace Temperance.Rules
         public const double NeutralTemperature = 1.0;
 
         /// <summary>The task's table temperature when a task is known (inferred or configured), else the neutral 1.0.</summary>
-        public static Limit Temperature(Request request, TemperancePolicy policy)
+        public static Limit Temperature(RuleInput input)
         {
-            var task = TaskInference.Infer(request, policy);
-            if (task != null && policy.TaskTemperatureOf(task.Kind) is { } value)
+            if (input.Task is { } task && input.Policy.TaskTemperatureOf(task.Kind) is { } value)
             {
                 return value;
             }

@@ -11,8 +11,9 @@ namespace Temperance.Rules
     /// </summary>
     internal static class RejectedSettingRule
     {
-        public static IEnumerable<Finding> Evaluate(Request request, TemperancePolicy policy)
+        public static IEnumerable<Finding> Evaluate(RuleInput input)
         {
+            var (request, policy) = (input.Request, input.Policy);
             var reported = new HashSet<SettingWrite>();
             if (policy.FamilyOf(request.EffectiveModelId) is { } family)
             {
@@ -27,7 +28,7 @@ namespace Temperance.Rules
 
                     reported.Add(write);
                     yield return new Finding(Descriptors.SettingRejectedOrDropped, write.Location, new FixPlan().Remove(write),
-                        write.Member, "rejected", $"model '{request.EffectiveModelId}'", $"family '{family.Name}', {family.Key}");
+                        write.Member, "rejected", $"model '{request.EffectiveModelId}'", $"family '{family.Name}', {family.Key}").About(write);
                 }
             }
 
@@ -44,7 +45,7 @@ namespace Temperance.Rules
 
                     yield return new Finding(Descriptors.SettingRejectedOrDropped, write.Location, new FixPlan().Remove(write),
                         write.Member, "silently dropped", request.AdapterDisplay ?? adapter,
-                        fromBag ? OptionKeys.AdapterDropsBagKeys(adapter) : key);
+                        fromBag ? OptionKeys.AdapterDropsBagKeys(adapter) : key).About(write);
                 }
             }
         }

@@ -1,19 +1,17 @@
 using System.Collections.Generic;
-using System.Linq;
 using Temperance.Model;
-using Temperance.Policy;
 
 namespace Temperance.Rules
 {
     /// <summary>
     /// SAMP001: a temperature above the ceiling for the call's task. An unset temperature counts as the provider's
-    /// default where that default really applies (see <see cref="TemperancePolicy.UnsetMeansDefault"/>).
+    /// default where that default really applies (see <see cref="Policy.TemperancePolicy.UnsetMeansDefault"/>).
     /// </summary>
     internal static class TaskCeilingRule
     {
-        public static IEnumerable<Finding> Evaluate(Request request, TemperancePolicy policy)
+        public static IEnumerable<Finding> Evaluate(RuleInput input)
         {
-            var task = TaskInference.Infer(request, policy);
+            var (request, policy, task) = (input.Request, input.Policy, input.Task);
             if (task == null || policy.TaskCeiling(task.Kind) is not { } ceiling)
             {
                 yield break; // no task, or a task without a ceiling (creative, brainstorming)
@@ -26,18 +24,19 @@ namespace Temperance.Rules
             }
 
             var target = policy.TaskTemperatureOf(task.Kind)?.Value ?? 0;
-            switch (request.KindOf(Setting.Temperature, out _))
+            var temperature = request.Value(Setting.Temperature);
+            switch (temperature.Kind)
             {
                 case ValueKind.Known:
-                    // One mistake, one warning: a value out of range (SAMP005) or extreme (SAMP009) is reported there.
-                    foreach (var write in EffectiveWrites(request).Where(w => w.Value > ceiling.Value
-                        && !ValueOutOfRangeRule.IsOutOfRange(w, request.Provider, policy, out _, out _)
-                        && !ExtremeTemperatureRule.IsExtreme(w, request.Provider, policy)))
+                    foreach (var write in temperature.Deciding)
                     {
-                        yield return new Finding(
-                            Descriptors.TemperatureAboveTaskCeiling, write.Location, new FixPlan().SetValue(write, target),
-                            $"Temperature {FixProperties.Show(write.Value)}{Notes.Origin(write)}{Notes.Conditional(write)}",
-                            FixProperties.Show(ceiling.Value), task.Kind, "task " + task.Because, ceiling.Key);
+                        if (write.Value > ceiling.Value)
+                        {
+                            yield return new Finding(
+                                Descriptors.TemperatureAboveTaskCeiling, write.Location, new FixPlan().SetValue(write, target),
+                                $"Temperature {FixProperties.Show(write.Value)}{Notes.Origin(write)}{Notes.Conditional(write)}",
+                                FixProperties.Show(ceiling.Value), task.Kind, "task " + task.Because, ceiling.Key).About(write);
+                        }
                     }
 
                     break;
@@ -46,7 +45,7 @@ namespace Temperance.Rules
                     && policy.Default(request.Provider, Setting.Temperature) is { } providerDefault
                     && providerDefault.Value > ceiling.Value:
                     var fix = new FixPlan();
-                    fix.AddUnset(request, (Setting.Temperature, target));
+                    fix.AddUnset(input.Anchors, (Setting.Temperature, target));
 
                     yield return new Finding(
                         Descriptors.TemperatureAboveTaskCeiling, request.Location, fix,
@@ -54,21 +53,6 @@ namespace Temperance.Rules
                         FixProperties.Show(ceiling.Value), task.Kind, "task " + task.Because, ceiling.Key);
                     break;
             }
-        }
-
-        /// <summary>The write(s) that decide the value: the last one, or every branch of a last conditional.</summary>
-        private static IEnumerable<SettingWrite> EffectiveWrites(Request request)
-        {
-            var temperature = request.Writes.Where(w => w.Setting == Setting.Temperature).ToList();
-            if (temperature.Count == 0)
-            {
-                return temperature;
-            }
-
-            var last = temperature[temperature.Count - 1];
-            return last.FromConditional
-                ? temperature.Where(w => w.Location == last.Location && w.Kind == ValueKind.Known)
-                : last.Kind == ValueKind.Known ? new[] { last } : System.Array.Empty<SettingWrite>();
         }
     }
 }

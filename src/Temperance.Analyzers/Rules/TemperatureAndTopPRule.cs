@@ -1,52 +1,35 @@
 using System.Collections.Generic;
-using System.Linq;
 using Temperance.Model;
-using Temperance.Policy;
 
 namespace Temperance.Rules
 {
     /// <summary>
     /// SAMP004: temperature and top-p both changed from the provider's defaults. A value written out that equals the
-    /// default is no change; temperature 0 or top-p 0 is SAMP006's case (one of them is then inert, not fighting).
+    /// default is no change, and at temperature 0 or top-p 0 decoding is greedy, so they cannot fight. When one of them cancels the other, or is rejected, out of range or extreme, that finding
+    /// stands instead (<see cref="Precedence"/>).
     /// </summary>
     internal static class TemperatureAndTopPRule
     {
-        public static IEnumerable<Finding> Evaluate(Request request, TemperancePolicy policy)
+        public static IEnumerable<Finding> Evaluate(RuleInput input)
         {
-            if (request.KindOf(Setting.Temperature, out var temperature) != ValueKind.Known
-                || request.KindOf(Setting.TopP, out var topP) != ValueKind.Known
-                || temperature == 0 || topP == 0)
-            {
-                yield break; // greedy either way: SAMP006 names the inert setting
-            }
-
-            if (policy.Default(request.Provider, Setting.Temperature) is not { } defaultTemperature
+            var (request, policy) = (input.Request, input.Policy);
+            var temperature = request.Value(Setting.Temperature);
+            var topP = request.Value(Setting.TopP);
+            if (!temperature.IsKnown || !topP.IsKnown
+                || temperature.Value == 0 || topP.Value == 0 // greedy either way: they cannot fight
+                || policy.Default(request.Provider, Setting.Temperature) is not { } defaultTemperature
                 || policy.Default(request.Provider, Setting.TopP) is not { } defaultTopP
-                || temperature == defaultTemperature.Value || topP == defaultTopP.Value)
+                || temperature.Value == defaultTemperature.Value || topP.Value == defaultTopP.Value)
             {
                 yield break;
             }
 
-            // A model that rejects either setting is SAMP007's to report.
-            if (policy.FamilyOf(request.EffectiveModelId) is { } family && (family.RejectsSetting(Setting.Temperature) || family.RejectsSetting(Setting.TopP)))
-            {
-                yield break;
-            }
-
-            var topPWrite = request.LastWrite(Setting.TopP)!;
-            var temperatureWrite = request.LastWrite(Setting.Temperature)!;
-
-            // One mistake, one warning: a value out of range (SAMP005) or extreme (SAMP009) is the thing to fix first.
-            if (ValueOutOfRangeRule.IsOutOfRange(topPWrite, request.Provider, policy, out _, out _)
-                || ValueOutOfRangeRule.IsOutOfRange(temperatureWrite, request.Provider, policy, out _, out _)
-                || ExtremeTemperatureRule.IsExtreme(temperatureWrite, request.Provider, policy))
-            {
-                yield break;
-            }
+            var topPWrite = topP.Last!;
+            var temperatureWrite = temperature.Last!;
             yield return new Finding(
                 Descriptors.TemperatureAndTopPBothChanged, topPWrite.Location, new FixPlan().Remove(topPWrite).Remove(temperatureWrite),
-                FixProperties.Show(temperature), FixProperties.Show(topP), request.Provider,
-                FixProperties.Show(defaultTemperature.Value), FixProperties.Show(defaultTopP.Value));
+                FixProperties.Show(temperature.Value), FixProperties.Show(topP.Value), request.Provider,
+                FixProperties.Show(defaultTemperature.Value), FixProperties.Show(defaultTopP.Value)).About(topPWrite, temperatureWrite);
         }
     }
 }

@@ -43,6 +43,23 @@ namespace Temperance.Surfaces
             "num_predict", "stream", "options", "response_format", "format", "tools", "stop",
         };
 
+        /// <summary>Ollama's native API nests sampling under this key: <c>new { model, options = new { temperature } }</c>.</summary>
+        public const string NestedOptionsKey = "options";
+
+        /// <summary>Keys that say what shape of answer a payload asks for.</summary>
+        public static readonly HashSet<string> FormatKeys = new HashSet<string>(StringComparer.Ordinal) { "response_format", "format" };
+
+        /// <summary>Static factories that wrap a payload value (<c>BinaryData.FromObjectAsJson(40)</c>, <c>JsonValue.Create(0.2)</c>): the value is the argument.</summary>
+        public static readonly (string Type, string Method)[] ValueWrappers = { ("BinaryData", "FromObjectAsJson"), ("JsonValue", "Create") };
+
+        /// <summary>Types whose methods serialise or post a payload, and the namespaces they must live in.</summary>
+        public static readonly HashSet<string> SerialiserTypes = new HashSet<string>(StringComparer.Ordinal)
+        {
+            "HttpClientJsonExtensions", "JsonSerializer", "JsonContent", "JsonConvert", "JsonNode", "JsonObject",
+        };
+
+        public static readonly string[] SerialiserNamespaces = { "System.Net.Http.Json", "System.Text.Json", "Newtonsoft.Json" };
+
         /// <summary>Types a payload can be built with (metadata names).</summary>
         public static readonly string[] PayloadTypes =
         {

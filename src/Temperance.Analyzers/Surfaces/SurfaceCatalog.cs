@@ -177,7 +177,7 @@ namespace Temperance.Surfaces
                 return null;
             }
 
-            if (method.Parameters.Length > 0 && method.Parameters[0].Type.Name == "BinaryContent")
+            if (method.Parameters.Length > 0 && method.Parameters[0].Type.Name == ClientShapes.ProtocolContentType)
             {
                 return null;
             }

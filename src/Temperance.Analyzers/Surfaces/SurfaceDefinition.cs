@@ -47,6 +47,9 @@ namespace Temperance.Surfaces
         /// </summary>
         public List<SendSite> SendSites { get; } = new List<SendSite>();
 
+        /// <summary>True when a member or key of this surface carries the setting.</summary>
+        public bool Carries(Setting setting) => Members.ContainsValue(setting) || Keys.ContainsValue(setting);
+
         public SurfaceDefinition Map(string member, Setting setting)
         {
             Members[member] = setting;

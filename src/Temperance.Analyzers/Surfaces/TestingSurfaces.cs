@@ -23,6 +23,22 @@ namespace Temperance.Surfaces
             "Azure.Core.Pipeline.HttpPipelineTransport",
         };
 
+        /// <summary>Calls that make a double: <c>Substitute.For</c>, <c>A.Fake</c>, <c>Mock.Of</c> (read by syntax in other files).</summary>
+        public static readonly (string Owner, string Method)[] MockFactories = { ("Substitute", "For"), ("A", "Fake"), ("Mock", "Of") };
+
+        /// <summary>Moq's double type, created with <c>new Mock&lt;T&gt;()</c>.</summary>
+        public const string MockType = "Mock";
+
+        /// <summary>A hand-written client over HTTP may well call a model: a class holding one is not a stand-in.</summary>
+        public const string HttpClientType = "System.Net.Http.HttpClient";
+
+        /// <summary>A handler that passes requests on to an inner handler, and the member that sets it.</summary>
+        public const string DelegatingHandlerType = "System.Net.Http.DelegatingHandler";
+        public const string InnerHandlerMember = "InnerHandler";
+
+        /// <summary>SDK base classes of client decorators: a class deriving from one is judged by the client it wraps.</summary>
+        public static readonly string[] DecoratorBaseTypes = { "Microsoft.Extensions.AI.DelegatingChatClient" };
+
         /// <summary>In-process test servers: a client pointed at one talks to the test, not to a model.</summary>
         public static readonly string[] TestServerTypes =
         {

@@ -33,7 +33,7 @@ public static class Extract
             var collector = BlockCollector.Collect(catalog, new[] { operation });
             if (collector != null)
             {
-                requests.AddRange(RequestBuilder.Build(catalog, new CallContext(owner, owner?.ContainingType, tests.IsTest(owner)), collector, new[] { operation }));
+                requests.AddRange(RequestBuilder.Build(catalog, new CallContext(owner, owner?.ContainingType, tests.IsTest(owner)), collector, new[] { operation }).Select(r => r.Request));
             }
         }
 
@@ -49,7 +49,7 @@ public static class Extract
 
     internal static (ValueKind Kind, double Value) Setting(this Request request, Setting setting)
     {
-        var kind = request.KindOf(setting, out var value);
-        return (kind, value);
+        var value = request.Value(setting);
+        return (value.Kind, value.Value);
     }
 }
