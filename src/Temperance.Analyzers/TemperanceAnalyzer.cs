@@ -135,12 +135,12 @@ namespace Temperance
                     continue; // never reaches a model (Request.SilentBecause says why)
                 }
 
-                foreach (var found in Rules.RuleSet.Judge(new RuleInput(extracted, state.Policy)))
+                foreach (var found in Rules.RuleCatalog.Judge(new RuleInput(extracted, state.Policy)))
                 {
                     var finding = found;
                     if (request.BorrowedFrom != null)
                     {
-                        if (!Rules.RuleSet.DependsOnCallSite(finding.Descriptor))
+                        if (!Rules.RuleCatalog.DependsOnCallSite(finding.Descriptor))
                         {
                             continue;
                         }

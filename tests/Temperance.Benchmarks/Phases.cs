@@ -71,7 +71,7 @@ public static class Phases
                     policies[tree] = policy = new TemperancePolicy(table.GetOptions(tree), table.GlobalOptions);
                 }
 
-                foreach (var finding in Temperance.Rules.RuleSet.Judge(new Temperance.Rules.RuleInput(request, policy)))
+                foreach (var finding in Temperance.Rules.RuleCatalog.Judge(new Temperance.Rules.RuleInput(request, policy)))
                 {
                     _ = finding.ToDiagnostic();
                     reported++;

@@ -69,7 +69,7 @@ namespace Temperance.Extraction
             request.SendingCallLocation = send.Syntax.GetLocation();
             var client = ClientOf(send);
             request.ClientModelId = ClientModel(client);
-            if (ClientAdapter(client) is { } adapter)
+            if ((scope.Catalog.AdapterOfSend(request.SendingCall) ?? ClientAdapter(client)) is { } adapter)
             {
                 request.Adapter = adapter.Name;
                 request.AdapterDisplay = adapter.Display;

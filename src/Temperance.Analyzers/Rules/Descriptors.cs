@@ -94,22 +94,22 @@ namespace Temperance.Rules
 
         /// <summary>
         /// Rules with no known false positives: the relaxed preset keeps only these as warnings while a team adopts the
-        /// package; every other rule becomes a suggestion there. Derived from <see cref="RuleSet"/> (SAMP100 judges only
+        /// package; every other rule becomes a suggestion there. Derived from <see cref="RuleCatalog"/> (SAMP100 judges only
         /// configuration).
         /// </summary>
         public static ImmutableHashSet<string> NoKnownFalsePositives => Derived.NoKnownFalsePositives;
 
-        /// <summary>Every descriptor: the rules of <see cref="RuleSet"/> in ID order, then SAMP100.</summary>
+        /// <summary>Every descriptor: the rules of <see cref="RuleCatalog"/> in ID order, then SAMP100.</summary>
         public static ImmutableArray<DiagnosticDescriptor> All => Derived.All;
 
-        /// <summary>Built on first use, after every descriptor field above exists (RuleSet refers to them).</summary>
+        /// <summary>Built on first use, after every descriptor field above exists (RuleCatalog refers to them).</summary>
         private static class Derived
         {
             public static readonly ImmutableArray<DiagnosticDescriptor> All =
-                RuleSet.All.Select(r => r.Descriptor).OrderBy(d => d.Id, System.StringComparer.Ordinal).Concat(new[] { InvalidConfiguration }).ToImmutableArray();
+                RuleCatalog.All.Select(r => r.Descriptor).OrderBy(d => d.Id, System.StringComparer.Ordinal).Concat(new[] { InvalidConfiguration }).ToImmutableArray();
 
             public static readonly ImmutableHashSet<string> NoKnownFalsePositives =
-                RuleSet.All.Where(r => r.NoKnownFalsePositives).Select(r => r.Descriptor.Id).Concat(new[] { InvalidConfiguration.Id }).ToImmutableHashSet();
+                RuleCatalog.All.Where(r => r.NoKnownFalsePositives).Select(r => r.Descriptor.Id).Concat(new[] { InvalidConfiguration.Id }).ToImmutableHashSet();
         }
 
         private static DiagnosticDescriptor Create(string id, string title, string message, string category, DiagnosticSeverity severity, string description, params string[] tags) =>

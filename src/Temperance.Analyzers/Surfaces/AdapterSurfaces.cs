@@ -1,4 +1,5 @@
 using System.Collections.Generic;
+using System.Linq;
 
 namespace Temperance.Surfaces
 {
@@ -27,17 +28,23 @@ namespace Temperance.Surfaces
         public string? Method { get; }
         /// <summary>The type the extension method extends, to tell the OpenAI chat adapter from the Responses one.</summary>
         public string? ReceiverType { get; }
+
+        /// <summary>
+        /// Methods of <see cref="DeclaringType"/> that take ChatOptions themselves and convert them the same way (MCP's
+        /// <c>SampleAsync(messages, options)</c>): a request sent through one goes through this adapter.
+        /// </summary>
+        public string[] Sends { get; set; } = System.Array.Empty<string>();
     }
 
     internal static class AdapterSurfaces
     {
-        public static readonly IReadOnlyList<AdapterDefinition> All = new[]
+        public static readonly IReadOnlyList<AdapterDefinition> All = new List<AdapterDefinition>
         {
             new AdapterDefinition("openai_chat", "the OpenAI chat adapter (AsIChatClient)", "Microsoft.Extensions.AI.OpenAIClientExtensions", "AsIChatClient", "OpenAI.Chat.ChatClient"),
             new AdapterDefinition("openai_responses", "the OpenAI Responses adapter (AsIChatClient)", "Microsoft.Extensions.AI.OpenAIClientExtensions", "AsIChatClient", "OpenAI.Responses.ResponsesClient"),
             new AdapterDefinition("anthropic", "the Anthropic adapter (AsIChatClient)", "Microsoft.Extensions.AI.AnthropicClientExtensions", "AsIChatClient", null),
             new AdapterDefinition("betalgo", "Betalgo's OpenAIService as IChatClient", "Betalgo.Ranul.OpenAI.Managers.OpenAIService", null, null),
             new AdapterDefinition("onnx_genai", "the ONNX Runtime GenAI chat client", "Microsoft.ML.OnnxRuntimeGenAI.OnnxRuntimeGenAIChatClient", null, null),
-        };
+        }.Concat(McpSurfaces.Adapters()).ToList();
     }
 }

@@ -15,6 +15,7 @@ namespace Temperance.Surfaces
             .Concat(OllamaSurfaces.All())
             .Concat(LocalRuntimeSurfaces.All())
             .Concat(OtherHostedSurfaces.All())
+            .Concat(McpSurfaces.All())
             .ToArray();
 
         private readonly Dictionary<INamedTypeSymbol, SurfaceDefinition> byType;
@@ -126,6 +127,26 @@ namespace Temperance.Surfaces
                     case IObjectCreationOperation creation when adapter.Method == null
                         && SymbolEqualityComparer.Default.Equals(creation.Type, declaring):
                         return adapter;
+                }
+            }
+
+            return null;
+        }
+
+        /// <summary>The adapter a send converts its options through itself (<see cref="AdapterDefinition.Sends"/>), when it is one.</summary>
+        public AdapterDefinition? AdapterOfSend(IMethodSymbol? method)
+        {
+            if (method?.ContainingType == null)
+            {
+                return null;
+            }
+
+            foreach (var (adapter, declaring, _) in adapters)
+            {
+                if (System.Array.IndexOf(adapter.Sends, method.Name) >= 0 && method.Parameters.Any(p => Find(p.Type) is { Provider: Providers.Generic })
+                    && SymbolEqualityComparer.Default.Equals(method.ContainingType.OriginalDefinition, declaring))
+                {
+                    return adapter;
                 }
             }
 

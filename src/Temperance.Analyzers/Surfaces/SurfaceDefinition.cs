@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Linq;
 using Temperance.Model;
 
 namespace Temperance.Surfaces
@@ -120,6 +121,8 @@ namespace Temperance.Surfaces
         /// <summary>Provider-agnostic surfaces (M.E.AI ChatOptions, SK base settings, raw JSON): the widest range any provider accepts.</summary>
         public const string Generic = "generic";
 
-        public static readonly string[] All = { OpenAI, AzureInference, Ollama, LLamaSharp, OnnxGenAI, Anthropic, Generic };
+        /// <summary>These and every provider an SDK file declares (<see cref="McpSurfaces.Provider"/> …).</summary>
+        public static readonly string[] All = new[] { OpenAI, AzureInference, Ollama, LLamaSharp, OnnxGenAI, Anthropic, Generic }
+            .Concat(SurfaceCatalog.Definitions.Select(d => d.Provider)).Distinct().ToArray();
     }
 }

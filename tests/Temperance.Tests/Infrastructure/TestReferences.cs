@@ -15,7 +15,7 @@ public static class TestReferences
     {
         "OpenAI", "Azure.AI.OpenAI", "Azure.AI.Inference", "Azure.Core", "System.ClientModel", "System.Memory.Data",
         "Microsoft.Extensions.AI", "Microsoft.SemanticKernel", "Microsoft.Agents.AI", "Anthropic", "OllamaSharp",
-        "LLamaSharp", "Microsoft.ML.OnnxRuntimeGenAI", "Betalgo.Ranul.OpenAI",
+        "LLamaSharp", "Microsoft.ML.OnnxRuntimeGenAI", "Betalgo.Ranul.OpenAI", "ModelContextProtocol",
         "Microsoft.Extensions.DependencyInjection.Abstractions", "Microsoft.Extensions.Logging.Abstractions",
         "Microsoft.Extensions.VectorData.Abstractions", "Microsoft.Bcl.AsyncInterfaces", "Microsoft.Bcl.HashCode",
         "xunit.assert", "xunit.core", "xunit.abstractions",

@@ -40,7 +40,7 @@ public sealed class TemperanceTest : CSharpCodeFixTest<TemperanceAnalyzer, Tempe
 /// <summary>Short entry points, in the style of the Microsoft.CodeAnalysis.Testing verifiers.</summary>
 public static class Verify
 {
-    public static DiagnosticResult Diagnostic(string id) => new DiagnosticResult(id, id == "SAMP006" ? DiagnosticSeverity.Info : DiagnosticSeverity.Warning);
+    public static DiagnosticResult Diagnostic(string id) => new DiagnosticResult(id, Temperance.Rules.Descriptors.All.Single(d => d.Id == id).DefaultSeverity);
 
     public static Task AnalyzerAsync(string source, params DiagnosticResult[] expected) => AnalyzerAsync(source, null, expected);
 

@@ -11,7 +11,7 @@ namespace Temperance.Rules
     /// <see cref="Descriptors"/>, a line here, its function, its page in <c>rules/</c> and its tests; the meta-tests check
     /// the README table, the presets and the release tracking against this list.
     /// </summary>
-    internal static class RuleSet
+    internal static class RuleCatalog
     {
         internal sealed class RuleDefinition
         {
