@@ -128,6 +128,18 @@ namespace Temperance.Extraction
             };
         }
 
+        public static IEnumerable<IOperation> Operands(IInvocationOperation invocation)
+        {
+            if (invocation.Instance != null)
+            {
+                yield return invocation.Instance;
+            }
+
+            foreach (var argument in invocation.Arguments)
+            {
+                yield return argument.Value;
+            }
+        }
         public static ISymbol? SymbolOf(IOperation? operation) => ValueReader.Unwrap(operation) switch
         {
             ILocalReferenceOperation local => local.Local,

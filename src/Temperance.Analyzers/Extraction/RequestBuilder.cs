@@ -90,12 +90,12 @@ namespace Temperance.Extraction
             switch (creation)
             {
                 case IObjectCreationOperation objectCreation when Catalog.Find(objectCreation.Type) is { } surface:
-                    if (IsNestedInContainer(objectCreation))
+                    if (reader.IsNestedInContainer(objectCreation))
                     {
                         return; // read as part of the container's request
                     }
 
-                    instances.Track(new Instance(ReadCreation(surface, objectCreation, objectCreation), creation, Instances.HolderOf(creation)));
+                    instances.Track(new Instance(reader.ReadCreation(surface, objectCreation, NewRequest(surface, objectCreation, originVisible: true)), creation, Instances.HolderOf(creation)));
                     return;
 
                 case IObjectCreationOperation payload:
@@ -123,17 +123,6 @@ namespace Temperance.Extraction
                     instances.Track(new Instance(derived, creation, Instances.HolderOf(creation)));
                     return;
             }
-        }
-
-        /// <summary>A visible creation of options: its initializer, where fixes can add members, and whether it can carry a seed.</summary>
-        private RequestDraft ReadCreation(SurfaceDefinition surface, IObjectCreationOperation creation, IOperation at)
-        {
-            var request = NewRequest(surface, at, originVisible: true);
-            reader.MarkUndeclared(request, creation.Type, surface);
-            reader.ReadInitializer(surface, creation.Initializer, request);
-            FixAnchorFinder.AddTargets(Catalog, request, creation, surface);
-            request.SeedAvailable = FixAnchorFinder.SeedAvailable(Catalog, surface, creation.Type);
-            return request;
         }
 
         private void AddMutation(ISimpleAssignmentOperation assignment)
@@ -203,7 +192,7 @@ namespace Temperance.Extraction
             // A hand-built payload counts once it is serialised or posted; where options go is Reachability's question.
             if (PayloadReader.IsSerialisation(method))
             {
-                foreach (var operand in Operands(invocation))
+                foreach (var operand in Instances.Operands(invocation))
                 {
                     if (instances.Of(operand, invocation.Syntax.SpanStart) is { IsPayload: true } payload)
                     {
@@ -284,7 +273,7 @@ namespace Temperance.Extraction
                     continue;
                 }
 
-                var request = ReadCreation(surface, creation, argument.Value);
+                var request = reader.ReadCreation(surface, creation, NewRequest(surface, argument.Value, originVisible: true));
                 request.BorrowedFrom = helper.Name;
                 instances.Track(new Instance(request, helperCall, null));
             }
@@ -294,32 +283,5 @@ namespace Temperance.Extraction
         private bool IsCopy(IInvocationOperation invocation) =>
             invocation.TargetMethod.Name == ClientShapes.CopyMethod && invocation.Instance != null && invocation.Arguments.Length == 0
             && Catalog.Find(invocation.Instance.Type) != null && Catalog.Find(invocation.Type) != null;
-
-        /// <summary>Options created as a container's nested member (<c>Options = new RequestOptions { … }</c>) belong to the container's request.</summary>
-        private bool IsNestedInContainer(IObjectCreationOperation creation)
-        {
-            var parent = creation.Parent;
-            while (parent is IConversionOperation)
-            {
-                parent = parent.Parent;
-            }
-
-            return parent is ISimpleAssignmentOperation { Target: IPropertyReferenceOperation member, Parent: IObjectOrCollectionInitializerOperation }
-                && Catalog.Find(member.Property.ContainingType) is { } container
-                && container.NestedMembers.Contains(member.Property.Name);
-        }
-
-        private static IEnumerable<IOperation> Operands(IInvocationOperation invocation)
-        {
-            if (invocation.Instance != null)
-            {
-                yield return invocation.Instance;
-            }
-
-            foreach (var argument in invocation.Arguments)
-            {
-                yield return argument.Value;
-            }
-        }
     }
 }

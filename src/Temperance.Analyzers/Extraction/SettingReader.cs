@@ -19,6 +19,30 @@ namespace Temperance.Extraction
             this.catalog = catalog;
         }
 
+        /// <summary>A visible creation of options: its initializer, where fixes can add members, and whether it can carry a seed.</summary>
+        public RequestDraft ReadCreation(SurfaceDefinition surface, IObjectCreationOperation creation, RequestDraft request)
+        {
+            MarkUndeclared(request, creation.Type, surface);
+            ReadInitializer(surface, creation.Initializer, request);
+            FixAnchorFinder.AddTargets(catalog, request, creation, surface);
+            request.SeedAvailable = FixAnchorFinder.SeedAvailable(catalog, surface, creation.Type);
+            return request;
+        }
+
+        /// <summary>Options created as a container's nested member (<c>Options = new RequestOptions { … }</c>) belong to the container's request.</summary>
+        public bool IsNestedInContainer(IObjectCreationOperation creation)
+        {
+            var parent = creation.Parent;
+            while (parent is IConversionOperation)
+            {
+                parent = parent.Parent;
+            }
+
+            return parent is ISimpleAssignmentOperation { Target: IPropertyReferenceOperation member, Parent: IObjectOrCollectionInitializerOperation }
+                && catalog.Find(member.Property.ContainingType) is { } container
+                && container.NestedMembers.Contains(member.Property.Name);
+        }
+
         public void ReadInitializer(SurfaceDefinition surface, IObjectOrCollectionInitializerOperation? initializer, RequestDraft request)
         {
             if (initializer == null)

@@ -25,12 +25,14 @@ namespace Temperance.Extraction
         private readonly SemanticModel? model;
         private readonly bool inTestCode;
         private readonly HashSet<ISymbol> visited = new HashSet<ISymbol>(SymbolEqualityComparer.Default);
+        private readonly StandInTypes standIns;
 
         public TestDoubles(SurfaceCatalog catalog, IReadOnlyList<IOperation> operations, bool inTestCode)
         {
             this.catalog = catalog;
             this.operations = operations;
             this.inTestCode = inTestCode;
+            standIns = new StandInTypes(catalog, inTestCode);
             model = operations.Count > 0 ? operations[0].SemanticModel : null;
         }
 
@@ -55,7 +57,7 @@ namespace Temperance.Extraction
                 };
             }
 
-            if (OfType(operation.Type) is { } byType)
+            if (standIns.OfType(operation.Type) is { } byType)
             {
                 return byType;
             }
@@ -63,7 +65,7 @@ namespace Temperance.Extraction
             switch (operation)
             {
                 case IObjectCreationOperation creation:
-                    return OfType(creation.Type) ?? CannedDelegatingHandler(creation) ?? Arguments(creation.Arguments, depth) ?? Initializer(creation.Initializer, depth);
+                    return standIns.OfType(creation.Type) ?? standIns.CannedDelegatingHandler(creation) ?? Arguments(creation.Arguments, depth) ?? Initializer(creation.Initializer, depth);
 
                 case IInvocationOperation invocation:
                     var method = invocation.TargetMethod;
@@ -72,7 +74,7 @@ namespace Temperance.Extraction
                         return $"a {method.ContainingNamespace.ToDisplayString()} double ({method.ContainingType.Name}.{method.Name})";
                     }
 
-                    if (IsTestServer(method.ContainingType))
+                    if (StandInTypes.IsTestServer(method.ContainingType))
                     {
                         return $"a client of the in-process test server ({method.ContainingType.Name})";
                     }
@@ -104,170 +106,6 @@ namespace Temperance.Extraction
                 default:
                     return null;
             }
-        }
-
-        /// <summary>A type that is a double by itself: a mocking library's type, or in test code a class of the project.</summary>
-        private string? OfType(ITypeSymbol? type)
-        {
-            if (type is not INamedTypeSymbol named || named.SpecialType != SpecialType.None)
-            {
-                return null;
-            }
-
-            if (SurfaceCatalog.InNamespace(named, TestingSurfaces.MockingNamespaces))
-            {
-                return $"a {named.ContainingNamespace.ToDisplayString()} double ({named.Name})";
-            }
-
-            if (IsTestServer(named))
-            {
-                return $"the in-process test server ({named.Name})";
-            }
-
-            if (named.TypeKind != TypeKind.Class || !named.Locations.Any(l => l.IsInSource))
-            {
-                return null;
-            }
-
-            if (!inTestCode)
-            {
-                // Product code has real clients of its own; one that holds no model client (no SDK client, no IChatClient,
-                // no HttpClient) wraps some other service and reaches no model.
-                return ActsAsClient(named) && !IsDecorator(named) && !HoldsAModelClient(named)
-                    ? $"'{named.Name}', a client of this project that holds no model client"
-                    : null;
-            }
-
-            if (DerivesFromAny(named, TestingSurfaces.TransportBaseTypes))
-            {
-                // A DelegatingHandler may pass requests on to a real handler: decided where it is created.
-                return DerivesFromDelegatingHandler(named) ? null : $"'{named.Name}', a transport declared in this project that answers instead of a model";
-            }
-
-            // Only a class that stands in for a client is a double: a fixture, a logger factory or the test class itself is not.
-            return ActsAsClient(named) && !IsDecorator(named) ? $"'{named.Name}', declared in this project" : null;
-        }
-
-        /// <summary>Derives from or implements a type that declares sends (IChatClient, ChatClient, IChatCompletionService …).</summary>
-        private bool ActsAsClient(INamedTypeSymbol type)
-        {
-            for (var current = type.BaseType; current != null && current.SpecialType == SpecialType.None; current = current.BaseType)
-            {
-                if (catalog.IsClientType(current))
-                {
-                    return true;
-                }
-            }
-
-            return type.AllInterfaces.Any(catalog.IsClientType);
-        }
-
-        /// <summary>
-        /// A field, property or constructor parameter whose type is a client (IChatClient, an SDK client) or an HttpClient
-        /// (a hand-written client over HTTP may well call a model): then the class may reach a model.
-        /// </summary>
-        private bool HoldsAModelClient(INamedTypeSymbol type)
-        {
-            bool IsModelClient(ITypeSymbol? candidate) =>
-                candidate is INamedTypeSymbol named && named.SpecialType == SpecialType.None
-                && (SurfaceCatalog.FullName(named) == TestingSurfaces.HttpClientType || catalog.IsClientType(named) || ActsAsClient(named));
-
-            foreach (var member in type.GetMembers())
-            {
-                var memberType = member switch
-                {
-                    IFieldSymbol field => field.Type,
-                    IPropertySymbol property => property.Type,
-                    _ => null,
-                };
-                if (IsModelClient(memberType))
-                {
-                    return true;
-                }
-            }
-
-            return type.InstanceConstructors.Any(c => c.Parameters.Any(p => IsModelClient(p.Type)));
-        }
-
-        private static bool DerivesFromDelegatingHandler(INamedTypeSymbol type)
-        {
-            for (var current = type.BaseType; current != null; current = current.BaseType)
-            {
-                if (SurfaceCatalog.FullName(current) == TestingSurfaces.DelegatingHandlerType)
-                {
-                    return true;
-                }
-            }
-
-            return false;
-        }
-
-        /// <summary>
-        /// <c>new RecordingHandlerStub()</c>: a DelegatingHandler of the project created without an inner handler cannot
-        /// pass anything on, so it answers itself (the usual shape of a handler stub).
-        /// </summary>
-        private string? CannedDelegatingHandler(IObjectCreationOperation creation)
-        {
-            if (!inTestCode || creation.Type is not INamedTypeSymbol type || !type.Locations.Any(l => l.IsInSource) || !DerivesFromDelegatingHandler(type))
-            {
-                return null;
-            }
-
-            var inner = creation.Arguments.Any(a => a.ArgumentKind == ArgumentKind.Explicit)
-                || (creation.Initializer?.Initializers.Any(i => i is ISimpleAssignmentOperation { Target: IPropertyReferenceOperation { Property.Name: TestingSurfaces.InnerHandlerMember } }) ?? false);
-            return inner ? null : $"'{type.Name}', a handler declared in this project that answers instead of a model";
-        }
-
-        /// <summary>A class that wraps another instance of what it is (a DelegatingChatClient, a DelegatingHandler): decided by what it wraps.</summary>
-        private static bool IsDecorator(INamedTypeSymbol type)
-        {
-            for (var current = type.BaseType; current != null; current = current.BaseType)
-            {
-                if (TestingSurfaces.DecoratorBaseTypes.Contains(SurfaceCatalog.FullName(current.OriginalDefinition)) && !current.Locations.Any(l => l.IsInSource))
-                {
-                    return true;
-                }
-            }
-
-            foreach (var constructor in type.InstanceConstructors)
-            {
-                foreach (var parameter in constructor.Parameters)
-                {
-                    if (parameter.Type is INamedTypeSymbol wrapped && wrapped.TypeKind == TypeKind.Interface
-                        && type.AllInterfaces.Contains(wrapped, SymbolEqualityComparer.Default))
-                    {
-                        return true;
-                    }
-                }
-            }
-
-            return false;
-        }
-
-        private static bool DerivesFromAny(INamedTypeSymbol type, string[] fullNames)
-        {
-            for (var current = type.BaseType; current != null; current = current.BaseType)
-            {
-                if (fullNames.Contains(SurfaceCatalog.FullName(current.OriginalDefinition)))
-                {
-                    return true;
-                }
-            }
-
-            return false;
-        }
-
-        private static bool IsTestServer(INamedTypeSymbol? type)
-        {
-            for (var current = type; current != null; current = current.BaseType)
-            {
-                if (TestingSurfaces.TestServerTypes.Contains(SurfaceCatalog.FullName(current.OriginalDefinition)))
-                {
-                    return true;
-                }
-            }
-
-            return false;
         }
 
         private string? Arguments(IEnumerable<IArgumentOperation> arguments, int depth)
@@ -426,7 +264,7 @@ namespace Temperance.Extraction
                         {
                             foreach (var type in compilation.GetSymbolsWithName(name, SymbolFilter.Type).OfType<INamedTypeSymbol>())
                             {
-                                if (OfType(type) is { } found)
+                                if (standIns.OfType(type) is { } found)
                                 {
                                     return found;
                                 }
@@ -441,57 +279,6 @@ namespace Temperance.Extraction
             }
 
             return null;
-        }
-    }
-
-    /// <summary>The expressions a field or property is given in its own type: initializer, expression body and assignments.</summary>
-    internal static class MemberValues
-    {
-        public static IEnumerable<ExpressionSyntax> Of(ISymbol member)
-        {
-            foreach (var reference in member.DeclaringSyntaxReferences)
-            {
-                switch (reference.GetSyntax())
-                {
-                    case VariableDeclaratorSyntax { Initializer: { } initializer }:
-                        yield return initializer.Value;
-                        break;
-                    case PropertyDeclarationSyntax property:
-                        if (property.Initializer != null)
-                        {
-                            yield return property.Initializer.Value;
-                        }
-
-                        if (property.ExpressionBody != null)
-                        {
-                            yield return property.ExpressionBody.Expression;
-                        }
-
-                        break;
-                }
-            }
-
-            if (member.ContainingType == null)
-            {
-                yield break;
-            }
-
-            foreach (var typeReference in member.ContainingType.DeclaringSyntaxReferences)
-            {
-                foreach (var assignment in typeReference.GetSyntax().DescendantNodes().OfType<AssignmentExpressionSyntax>())
-                {
-                    var target = assignment.Left switch
-                    {
-                        IdentifierNameSyntax identifier => identifier.Identifier.ValueText,
-                        MemberAccessExpressionSyntax { Expression: ThisExpressionSyntax } access => access.Name.Identifier.ValueText,
-                        _ => null,
-                    };
-                    if (target == member.Name)
-                    {
-                        yield return assignment.Right;
-                    }
-                }
-            }
         }
     }
 }

@@ -121,7 +121,7 @@ namespace Temperance.Surfaces
         /// <summary>Provider-agnostic surfaces (M.E.AI ChatOptions, SK base settings, raw JSON): the widest range any provider accepts.</summary>
         public const string Generic = "generic";
 
-        /// <summary>These and every provider an SDK file declares (<see cref="McpSurfaces.Provider"/> …).</summary>
+        /// <summary>These and any other provider an SDK file declares.</summary>
         public static readonly string[] All = new[] { OpenAI, AzureInference, Ollama, LLamaSharp, OnnxGenAI, Anthropic, Generic }
             .Concat(SurfaceCatalog.Definitions.Select(d => d.Provider)).Distinct().ToArray();
     }

@@ -20,7 +20,7 @@ public class McpSurfaceTests
         """;
 
     [Fact]
-    public void SampleAsync_WithRequestParams_IsARequestOfTheMcpProvider()
+    public void SampleAsync_WithRequestParams_IsAProviderAgnosticRequest()
     {
         var request = Extract.Single(Usings + """
             class TideNoticeTools
@@ -35,7 +35,7 @@ public class McpSurfaceTests
             }
             """);
 
-        Assert.Equal("mcp", request.Provider);
+        Assert.Equal("generic", request.Provider); // the client picks the model; the specification publishes no range
         Assert.Equal((ValueKind.Known, 0.3), request.Setting(Setting.Temperature));
         Assert.Equal(Reach.Sent, request.Reach);
         Assert.Equal("SampleAsync", request.SendingCall?.Name);
