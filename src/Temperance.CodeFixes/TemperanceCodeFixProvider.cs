@@ -18,8 +18,9 @@ using Temperance.Rules;
 namespace Temperance.CodeFixes
 {
     /// <summary>
-    /// The one fixer. Rules describe numbered edits in diagnostic Properties (see <see cref="FixProperties"/>); this
-    /// provider applies three generic edits, so a new rule with a known edit needs no new fixer.
+    /// The one fixer. Rules describe their fix as <see cref="FixEdits"/> carried in diagnostic Properties (FixEdit.cs
+    /// encodes and decodes them); this provider applies four generic edits (<see cref="FixEditKind"/>), and wraps the
+    /// statement in a pragma when an edit uses an experimental member, so a new rule with a known edit needs no new fixer.
     /// </summary>
     [ExportCodeFixProvider(LanguageNames.CSharp, Name = nameof(TemperanceCodeFixProvider)), Shared]
     public sealed class TemperanceCodeFixProvider : CodeFixProvider
@@ -36,16 +37,15 @@ namespace Temperance.CodeFixes
         {
             foreach (var diagnostic in context.Diagnostics)
             {
-                if (!diagnostic.Properties.TryGetValue(FixProperties.EditCount, out var countText)
-                    || !int.TryParse(countText, NumberStyles.Integer, CultureInfo.InvariantCulture, out var count))
+                if (!FixProperties.TryDecode(diagnostic.Properties, out var fix))
                 {
                     continue;
                 }
 
                 var edits = new List<Edit>();
-                for (var index = 0; index < count; index++)
+                for (var index = 0; index < fix.Edits.Length; index++)
                 {
-                    if (Edit.TryRead(diagnostic, index, out var edit) && (edit.Kind != FixProperties.RemoveMember || context.Document.TryGetSyntaxRoot(out var root) is false
+                    if (Edit.TryCreate(fix.Edits[index], index, out var edit) && (edit.Kind != FixEditKind.RemoveMember || context.Document.TryGetSyntaxRoot(out var root) is false
                         || Removable(root!.FindNode(edit.Span, getInnermostNodeForTie: true)) != null))
                     {
                         edits.Add(edit);
@@ -57,7 +57,7 @@ namespace Temperance.CodeFixes
                     continue;
                 }
 
-                if (diagnostic.Properties.TryGetValue(FixProperties.Combine, out var combine) && combine == "true")
+                if (fix.Combined)
                 {
                     var title = string.Join(" and ", edits.Select(e => e.Title));
                     context.RegisterCodeFix(
@@ -140,7 +140,7 @@ namespace Temperance.CodeFixes
             var node = root.FindNode(edit.Span, getInnermostNodeForTie: true);
             switch (edit.Kind)
             {
-                case FixProperties.SetValue:
+                case FixEditKind.SetValue:
                     // The outermost expression with exactly the span (an argument or parenthesis around it is not the value).
                     while (node.Parent is ExpressionSyntax && node.Parent.Span == edit.Span)
                     {
@@ -148,11 +148,11 @@ namespace Temperance.CodeFixes
                     }
 
                     return node as ExpressionSyntax;
-                case FixProperties.AddMember:
+                case FixEditKind.AddMember:
                     return FindCreation(node);
-                case FixProperties.AddArgument:
+                case FixEditKind.AddArgument:
                     return node.DescendantNodesAndSelf().OfType<InvocationExpressionSyntax>().FirstOrDefault();
-                case FixProperties.RemoveMember:
+                case FixEditKind.RemoveMember:
                     return Removable(node);
                 default:
                     return null;
@@ -161,10 +161,10 @@ namespace Temperance.CodeFixes
 
         private static SyntaxNode ApplyOne(SyntaxNode root, SyntaxNode node, Edit edit) => edit.Kind switch
         {
-            FixProperties.SetValue => root.ReplaceNode(node, SyntaxFactory.ParseExpression(edit.Literal).WithTriviaFrom(node).WithAdditionalAnnotations(node.GetAnnotations("Temperance.Target"))),
-            FixProperties.AddMember when node is BaseObjectCreationExpressionSyntax creation => root.ReplaceNode(creation, AddMember(creation, edit)),
-            FixProperties.AddArgument when node is InvocationExpressionSyntax call => root.ReplaceNode(call, AddArgument(call, edit)),
-            FixProperties.RemoveMember => Remove(root, node),
+            FixEditKind.SetValue => root.ReplaceNode(node, SyntaxFactory.ParseExpression(edit.Literal).WithTriviaFrom(node).WithAdditionalAnnotations(node.GetAnnotations("Temperance.Target"))),
+            FixEditKind.AddMember when node is BaseObjectCreationExpressionSyntax creation => root.ReplaceNode(creation, AddMember(creation, edit)),
+            FixEditKind.AddArgument when node is InvocationExpressionSyntax call => root.ReplaceNode(call, AddArgument(call, edit)),
+            FixEditKind.RemoveMember => Remove(root, node),
             _ => root,
         };
 
@@ -412,19 +412,32 @@ namespace Temperance.CodeFixes
             return literal.Length > 0;
         }
 
-        /// <summary>One numbered edit read back from a diagnostic.</summary>
+        /// <summary>A decoded edit with its literals formatted for the member's type.</summary>
         private sealed class Edit
         {
-            public string Kind { get; private set; } = string.Empty;
-            public Microsoft.CodeAnalysis.Text.TextSpan Span { get; private set; }
-            public string Literal { get; private set; } = string.Empty;
-            public string Member { get; private set; } = string.Empty;
-            public string? Wrapper { get; private set; }
-            public string? TypeName { get; private set; }
-            public string? Parameter { get; private set; }
-            public int Index { get; private set; }
-            public string? Experimental { get; private set; }
-            public IReadOnlyList<(string Member, string Literal)> Extras { get; private set; } = System.Array.Empty<(string, string)>();
+            private Edit(FixEdit source, int index, string literal, IReadOnlyList<(string Member, string Literal)> extras)
+            {
+                Source = source;
+                Index = index;
+                Literal = literal;
+                Extras = extras;
+            }
+
+            public FixEdit Source { get; }
+            /// <summary>Its position among the diagnostic's edits, part of its equivalence key.</summary>
+            public int Index { get; }
+            public string Literal { get; }
+            /// <summary>The extra assignments whose literal can be written (a negative uint cannot; it is left out).</summary>
+            public IReadOnlyList<(string Member, string Literal)> Extras { get; }
+
+            public FixEditKind Kind => Source.Kind;
+            public Microsoft.CodeAnalysis.Text.TextSpan Span => Source.Span;
+            public string Member => Source.Member;
+            public string? Wrapper => Source.WrapperMember;
+            /// <summary>The type of the new object: the wrapper of an AddMember, the options of an AddArgument.</summary>
+            public string? TypeName => Source.Kind == FixEditKind.AddArgument ? Source.OptionsType : Source.WrapperType;
+            public string? Parameter => Source.Parameter;
+            public string? Experimental => Source.Experimental;
 
             /// <summary>The member assignments an AddMember/AddArgument writes: the main one, then the extras.</summary>
             public IReadOnlyList<(string Member, ExpressionSyntax Value)> Assignments =>
@@ -434,72 +447,31 @@ namespace Temperance.CodeFixes
 
             public string Title => Kind switch
             {
-                FixProperties.AddMember => $"Add {AssignmentText}",
-                FixProperties.AddArgument => $"Pass options with {AssignmentText}",
-                FixProperties.RemoveMember => $"Remove {Member}",
+                FixEditKind.AddMember => $"Add {AssignmentText}",
+                FixEditKind.AddArgument => $"Pass options with {AssignmentText}",
+                FixEditKind.RemoveMember => $"Remove {Member}",
                 _ => $"Set {Member} to {Literal}",
             };
 
-            public static bool TryRead(Diagnostic diagnostic, int index, out Edit edit)
+            /// <summary>False when the main value has no literal of the member's type (a negative uint).</summary>
+            public static bool TryCreate(FixEdit source, int index, out Edit edit)
             {
-                edit = new Edit();
-                var properties = diagnostic.Properties;
-                if (!properties.TryGetValue(FixProperties.Edit(index), out var kind) || kind == null
-                    || !properties.TryGetValue(FixProperties.Value(index), out var valueText)
-                    || !double.TryParse(valueText, NumberStyles.Float, CultureInfo.InvariantCulture, out var value)
-                    || !properties.TryGetValue(FixProperties.NumericKind(index), out var kindText)
-                    || !System.Enum.TryParse<NumericKind>(kindText, out var numericKind)
-                    || !TryFormat(value, numericKind, out var literal))
+                edit = null!;
+                if (!TryFormat(source.Value, source.NumericKind, out var literal))
                 {
                     return false;
                 }
 
-                properties.TryGetValue(FixProperties.Member(index), out var member);
-                properties.TryGetValue(FixProperties.Wrapper(index), out var wrapper);
-                properties.TryGetValue(FixProperties.TypeName(index), out var typeName);
-                properties.TryGetValue(FixProperties.Parameter(index), out var parameter);
-                properties.TryGetValue(FixProperties.Experimental(index), out var experimental);
                 var extras = new List<(string, string)>();
-                if (properties.TryGetValue(FixProperties.Extra(index), out var extraText) && !string.IsNullOrEmpty(extraText))
+                foreach (var extra in source.Extras)
                 {
-                    foreach (var entry in extraText!.Split(';'))
+                    if (TryFormat(extra.Value, extra.Kind, out var extraLiteral))
                     {
-                        var parts = entry.Split('|');
-                        if (parts.Length == 3 && System.Enum.TryParse<NumericKind>(parts[1], out var extraKind)
-                            && double.TryParse(parts[2], NumberStyles.Float, CultureInfo.InvariantCulture, out var extraValue)
-                            && TryFormat(extraValue, extraKind, out var extraLiteral))
-                        {
-                            extras.Add((parts[0], extraLiteral));
-                        }
+                        extras.Add((extra.Member, extraLiteral));
                     }
                 }
-                if (kind == FixProperties.AddArgument && (parameter == null || typeName == null))
-                {
-                    return false;
-                }
 
-                if (!properties.TryGetValue(FixProperties.Span(index), out var spanText) || spanText?.Split(':') is not { Length: 2 } spanParts
-                    || !int.TryParse(spanParts[0], NumberStyles.Integer, CultureInfo.InvariantCulture, out var start)
-                    || !int.TryParse(spanParts[1], NumberStyles.Integer, CultureInfo.InvariantCulture, out var length))
-                {
-                    return false;
-                }
-
-                var span = new Microsoft.CodeAnalysis.Text.TextSpan(start, length);
-
-                edit = new Edit
-                {
-                    Kind = kind,
-                    Span = span,
-                    Literal = literal,
-                    Member = member ?? string.Empty,
-                    Wrapper = wrapper,
-                    TypeName = typeName,
-                    Parameter = parameter,
-                    Index = index,
-                    Experimental = experimental,
-                    Extras = extras,
-                };
+                edit = new Edit(source, index, literal, extras);
                 return true;
             }
         }
