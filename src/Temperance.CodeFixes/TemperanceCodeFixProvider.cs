@@ -25,11 +25,8 @@ namespace Temperance.CodeFixes
     [ExportCodeFixProvider(LanguageNames.CSharp, Name = nameof(TemperanceCodeFixProvider)), Shared]
     public sealed class TemperanceCodeFixProvider : CodeFixProvider
     {
-        public override ImmutableArray<string> FixableDiagnosticIds { get; } = ImmutableArray.Create(
-            Descriptors.ValueOutOfRange.Id, Descriptors.ExtremeTemperature.Id,
-            Descriptors.TemperatureAboveTaskCeiling.Id, Descriptors.CandidatesAtTemperatureZero.Id,
-            Descriptors.TemperatureAndTopPBothChanged.Id, Descriptors.InertSetting.Id, Descriptors.SettingRejectedOrDropped.Id,
-            Descriptors.RandomSamplingInExactTest.Id, Descriptors.MissingSeed.Id);
+        /// <summary>Derived from the rule catalog: every rule whose findings carry an edit.</summary>
+        public override ImmutableArray<string> FixableDiagnosticIds { get; } = RuleCatalog.FixableIds.ToImmutableArray();
 
         public override FixAllProvider GetFixAllProvider() => WellKnownFixAllProviders.BatchFixer;
 
