@@ -50,7 +50,7 @@ namespace Temperance.Extraction
                 var result = reachability.Of(instance.Creation, instance.Holder, instance.Creation?.Syntax.SpanStart ?? 0);
                 request.Reach = result.Reach;
                 request.ReachNote = result.Reach == Reach.Sent
-                    ? (result.Through == null ? null : $"sent through '{Reachability.SendName(result.Send!)}' to '{result.Through}'")
+                    ? (result.Through == null ? null : $"sent through '{Calls.SendName(result.Send!)}' to '{result.Through}'")
                     : result.Escape;
                 send = result.Send;
                 innerSend = result.InnerSend;
@@ -87,7 +87,7 @@ namespace Temperance.Extraction
             if (request.TestDouble == null && innerSend != null)
             {
                 // Sent through a helper of this file: the helper's own client decides.
-                var helperBody = Reachability.Root(innerSend).DescendantsAndSelf().ToList();
+                var helperBody = Calls.Root(innerSend).DescendantsAndSelf().ToList();
                 request.TestDouble = new TestDoubles(scope.Catalog, helperBody, scope.Context.InTestCode).Describe(ClientOf(innerSend));
             }
 

@@ -14,7 +14,7 @@ namespace Temperance.Extraction
     /// field or property, handed to code we cannot read), or nowhere that reaches a model (a serialiser, a logger, an
     /// assertion, a mock's expectation, nothing at all).
     /// </summary>
-    internal sealed class Reachability
+    internal sealed partial class Reachability
     {
         private const int MaxHelperDepth = 3;
 
@@ -141,7 +141,7 @@ namespace Temperance.Extraction
                         continue;
                     case IInvocationOperation invocation when ReferenceEquals(invocation.Instance, current):
                         // The carrier's own method: chat.SendAsync(…) on an OllamaSharp Chat holding the options.
-                        if (catalog.IsSend(invocation.TargetMethod) && !IsExpectation(invocation))
+                        if (catalog.IsSend(invocation.TargetMethod) && !Calls.IsExpectation(invocation))
                         {
                             Sent(result, invocation, null);
                         }
@@ -197,7 +197,7 @@ namespace Temperance.Extraction
 
             if (catalog.IsSend(method))
             {
-                if (!IsExpectation(call))
+                if (!Calls.IsExpectation(call))
                 {
                     Sent(result, call, null);
                 }
@@ -247,99 +247,5 @@ namespace Temperance.Extraction
                 result.Escape = why;
             }
         }
-
-        /// <summary>
-        /// A send written inside a lambda that becomes an expression tree (a mock's Setup/Verify, FakeItEasy's CallTo) is a
-        /// description of a call, never run.
-        /// </summary>
-        internal static bool IsExpectation(IOperation send)
-        {
-            for (var current = send.Parent; current != null; current = current.Parent)
-            {
-                // The lambda's delegate creation, or the conversion around it, has the Expression<T> type.
-                if (current is IAnonymousFunctionOperation { Parent: { } converted }
-                    && (IsExpressionTree(converted.Type) || IsExpressionTree(converted.Parent?.Type)))
-                {
-                    return true;
-                }
-            }
-
-            return false;
-        }
-
-        private static bool IsExpressionTree(ITypeSymbol? type) =>
-            type is INamedTypeSymbol { Name: "Expression" } expression && expression.ContainingNamespace?.ToDisplayString() == "System.Linq.Expressions";
-
-        /// <summary>The outermost operation of the body an operation belongs to.</summary>
-        internal static IOperation Root(IOperation operation)
-        {
-            while (operation.Parent != null)
-            {
-                operation = operation.Parent;
-            }
-
-            return operation;
-        }
-
-        /// <summary>
-        /// Whether a method of the project passes its options parameter on to a declared send: read through its operations
-        /// when it is in the same file, else by its syntax (a call named like a send that mentions the parameter).
-        /// Returns the send's name, or null.
-        /// </summary>
-        private (string Name, IOperation? Send)? HelperSends(IMethodSymbol helper)
-        {
-            if (helperDepth >= MaxHelperDepth || helper.IsAbstract || helper.DeclaringSyntaxReferences.Length == 0)
-            {
-                return null;
-            }
-
-            var parameters = helper.Parameters.Where(p => catalog.Find(p.Type) != null).ToList();
-            if (parameters.Count == 0)
-            {
-                return null;
-            }
-
-            var syntax = helper.DeclaringSyntaxReferences[0].GetSyntax();
-            var model = operations.Count > 0 ? operations[0].SemanticModel : null;
-            if (model != null && syntax.SyntaxTree == model.SyntaxTree && model.GetOperation(syntax) is { } body)
-            {
-                var inner = new Reachability(catalog, body.DescendantsAndSelf().ToList(), helperDepth + 1);
-                foreach (var parameter in parameters)
-                {
-                    var reached = inner.Of(null, parameter, 0);
-                    if (reached.Reach == Reach.Sent && reached.Send != null)
-                    {
-                        return (reached.Through ?? SendName(reached.Send), reached.InnerSend ?? reached.Send);
-                    }
-                }
-
-                return null;
-            }
-
-            // Another file: no semantic model here, so read the syntax.
-            foreach (var call in syntax.DescendantNodes().OfType<InvocationExpressionSyntax>())
-            {
-                var name = call.Expression switch
-                {
-                    MemberAccessExpressionSyntax access => access.Name.Identifier.ValueText,
-                    IdentifierNameSyntax identifier => identifier.Identifier.ValueText,
-                    _ => null,
-                };
-                if (name != null && catalog.SendMethodNames.Contains(name)
-                    && call.ArgumentList.DescendantNodes().OfType<IdentifierNameSyntax>().Any(i => parameters.Any(p => p.Name == i.Identifier.ValueText)))
-                {
-                    return (name, null);
-                }
-            }
-
-            return null;
-        }
-
-        public static string SendName(IOperation send) => send switch
-        {
-            IInvocationOperation invocation => invocation.TargetMethod.Name,
-            IObjectCreationOperation creation => "new " + creation.Type?.Name,
-            _ => "a send",
-        };
     }
 }

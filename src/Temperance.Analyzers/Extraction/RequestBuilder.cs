@@ -226,7 +226,7 @@ namespace Temperance.Extraction
 
             // Only a declared send is a request; a factory or mapper with an omitted options parameter is not.
             surface ??= Catalog.SurfaceSentBy(invocation.TargetMethod);
-            if (surface == null || !Catalog.IsSend(invocation.TargetMethod) || Reachability.IsExpectation(invocation))
+            if (surface == null || !Catalog.IsSend(invocation.TargetMethod) || Calls.IsExpectation(invocation))
             {
                 return;
             }

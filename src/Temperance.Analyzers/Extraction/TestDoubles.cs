@@ -152,8 +152,8 @@ namespace Temperance.Extraction
                 return null;
             }
 
-            var top = Reachability.Root(reference);
-            var body = operations.Count > 0 && ReferenceEquals(Reachability.Root(operations[0]), top) ? operations : top.DescendantsAndSelf().ToList();
+            var top = Calls.Root(reference);
+            var body = operations.Count > 0 && ReferenceEquals(Calls.Root(operations[0]), top) ? operations : top.DescendantsAndSelf().ToList();
             foreach (var operation in body)
             {
                 var found = operation switch

@@ -20,26 +20,6 @@ namespace Temperance.Policy
 
         private static readonly string[] SurfaceSettingKeys = { "temperature", "top_p", "top_k", "seed", "candidates" };
 
-        private static readonly Regex KnownKey = new Regex(
-            "^temperance\\.(" + string.Join("|", new[]
-            {
-                "extreme_temperature", "task", "candidates_temperature", "test_seed", "require_seed", "test_attributes", "raw_json",
-                "task\\.[a-z_]+\\.(temperature|max_temperature)",
-                "provider\\.[a-z_]+\\.[a-z_]+\\.(min|max|default)",
-                "provider\\.[a-z_]+\\.unset_means_default",
-                "model\\.[a-z0-9_]+\\.(match|rejects|except)",
-                "adapter\\.[a-z0-9_]+\\.(drops|drops_bag_keys)",
-                "surface\\.[a-z0-9_]+\\.(type|provider|temperature|top_p|top_k|seed|candidates|model|response_format|sends)",
-            }) + ")$",
-            RegexOptions.CultureInvariant);
-
-        /// <summary>Keys that take no name part, offered as suggestions for misspellings (the rules table supplies the rest).</summary>
-        private static readonly string[] FixedKeys =
-        {
-            OptionKeys.ExtremeTemperature, OptionKeys.Task, OptionKeys.TestSeed, OptionKeys.RequireSeed, OptionKeys.TestAttributes,
-            OptionKeys.RawJson, OptionKeys.CandidatesTemperature,
-        };
-
         public List<SurfaceDefinition> Surfaces { get; } = new List<SurfaceDefinition>();
         public List<ConfigProblem> Problems { get; } = new List<ConfigProblem>();
         public RawJsonMode RawJson { get; private set; } = RawJsonMode.Auto;
@@ -66,10 +46,10 @@ namespace Temperance.Policy
             }
 
             var config = new CompilationConfig();
-            var known = values.Keys.Where(k => KnownKey.IsMatch(k)).Concat(FixedKeys).Distinct(StringComparer.Ordinal).ToList();
+            var known = values.Keys.Where(k => OptionKeys.IsKnown(k)).Concat(OptionKeys.FixedKeys).Distinct(StringComparer.Ordinal).ToList();
             foreach (var pair in values.OrderBy(p => p.Key, StringComparer.Ordinal))
             {
-                if (!KnownKey.IsMatch(pair.Key))
+                if (!OptionKeys.IsKnown(pair.Key))
                 {
                     config.Problems.Add(new ConfigProblem(pair.Key, pair.Value,
                         "a key Temperance knows" + ConfigSource.Suggestion(pair.Key, known) + " (a misspelt key is ignored until fixed; see the README's Configuration section)"));

@@ -45,6 +45,35 @@ namespace Temperance.Policy
         /// <summary><c>temperance.adapter.openai_chat.drops_bag_keys</c>: whether it ignores sampling keys in AdditionalProperties.</summary>
         public static string AdapterDropsBagKeys(string adapter) => $"temperance.adapter.{adapter}.drops_bag_keys";
 
+        /// <summary>
+        /// Every key Temperance reads, once: the keys that take no name part, then the key families (a pattern over
+        /// <c>temperance.</c>). The known-keys check and the misspelling suggestions are derived from this list, so a new
+        /// option is its line here and the policy accessor that reads it.
+        /// </summary>
+        public static readonly string[] FixedKeys =
+        {
+            ExtremeTemperature, Task, TestSeed, RequireSeed, TestAttributes, RawJson, CandidatesTemperature,
+        };
+
+        /// <summary>Key families, as regular expressions over the part after <c>temperance.</c> (see the methods above).</summary>
+        public static readonly string[] KeyFamilies =
+        {
+            "task\\.[a-z_]+\\.(temperature|max_temperature)",
+            "provider\\.[a-z_]+\\.[a-z_]+\\.(min|max|default)",
+            "provider\\.[a-z_]+\\.unset_means_default",
+            "model\\.[a-z0-9_]+\\.(match|rejects|except)",
+            "adapter\\.[a-z0-9_]+\\.(drops|drops_bag_keys)",
+            "surface\\.[a-z0-9_]+\\.(type|provider|temperature|top_p|top_k|seed|candidates|model|response_format|sends)",
+        };
+
+        /// <summary>Whether a key is one Temperance reads (a fixed key or a member of a key family).</summary>
+        public static bool IsKnown(string key) => KnownKey.IsMatch(key);
+
+        private static readonly System.Text.RegularExpressions.Regex KnownKey = new System.Text.RegularExpressions.Regex(
+            "^(" + string.Join("|", System.Linq.Enumerable.Select(FixedKeys, System.Text.RegularExpressions.Regex.Escape))
+            + "|temperance\\.(" + string.Join("|", KeyFamilies) + "))$",
+            System.Text.RegularExpressions.RegexOptions.CultureInvariant);
+
         public static readonly string[] TaskKinds =
         {
             "extraction", "classification", "code", "evaluation", "tool_use",

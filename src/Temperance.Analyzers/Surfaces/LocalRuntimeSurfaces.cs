@@ -20,12 +20,8 @@ namespace Temperance.Surfaces
                 .Sends("LLama.ChatSession", "ChatAsync", "RegenerateAssistantMessageAsync"),
             // Everything goes through string keys; these are the ones the managed assembly itself uses.
             new SurfaceDefinition("Microsoft.ML.OnnxRuntimeGenAI.GeneratorParams", Providers.OnnxGenAI) { KeyedMethod = "SetSearchOption", ShapeMethod = "SetGuidance" }
-                .Key("temperature", Setting.Temperature)
-                .Key("top_p", Setting.TopP)
-                .Key("top_k", Setting.TopK)
+                .TradeNameKeys(Setting.Temperature, Setting.TopP, Setting.TopK, Setting.RepetitionPenalty, Setting.DoSample)
                 .Key("random_seed", Setting.Seed)
-                .Key("repetition_penalty", Setting.RepetitionPenalty)
-                .Key("do_sample", Setting.DoSample)
                 .Sends("Microsoft.ML.OnnxRuntimeGenAI.Generator", SendSite.Constructor),
         };
     }

@@ -18,11 +18,7 @@ namespace Temperance.Surfaces
                 .Map("TopK", Setting.TopK)
                 .Map("Seed", Setting.Seed)
                 // Keys adapters read from AdditionalProperties: OllamaSharp's option names, Betalgo's "N".
-                .Key("temperature", Setting.Temperature)
-                .Key("top_p", Setting.TopP)
-                .Key("top_k", Setting.TopK)
-                .Key("min_p", Setting.MinP)
-                .Key("seed", Setting.Seed)
+                .TradeNameKeys(Setting.Temperature, Setting.TopP, Setting.TopK, Setting.MinP, Setting.Seed)
                 .Key("repeat_penalty", Setting.RepetitionPenalty)
                 .Key("N", Setting.Candidates)
                 .Sends("Microsoft.Extensions.AI.IChatClient", "GetResponseAsync", "GetStreamingResponseAsync")

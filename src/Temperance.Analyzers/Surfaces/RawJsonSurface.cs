@@ -20,18 +20,22 @@ namespace Temperance.Surfaces
     {
         public const string ModelKey = "model";
 
-        public static readonly IReadOnlyDictionary<string, Setting> Keys = new Dictionary<string, Setting>(StringComparer.Ordinal)
+        /// <summary>
+        /// Sampling keys of the chat-completions wire format and its local cousins: the trade names, plus <c>n</c> (candidates)
+        /// and Ollama's <c>repeat_penalty</c>. Case-sensitive, as JSON is.
+        /// </summary>
+        public static readonly IReadOnlyDictionary<string, Setting> Keys = WireKeys();
+
+        private static Dictionary<string, Setting> WireKeys()
         {
-            ["temperature"] = Setting.Temperature,
-            ["top_p"] = Setting.TopP,
-            ["top_k"] = Setting.TopK,
-            ["min_p"] = Setting.MinP,
-            ["seed"] = Setting.Seed,
-            ["n"] = Setting.Candidates,
-            ["frequency_penalty"] = Setting.FrequencyPenalty,
-            ["presence_penalty"] = Setting.PresencePenalty,
-            ["repeat_penalty"] = Setting.RepetitionPenalty,
-        };
+            var keys = new Dictionary<string, Setting>(StringComparer.Ordinal) { ["n"] = Setting.Candidates, ["repeat_penalty"] = Setting.RepetitionPenalty };
+            foreach (var setting in new[] { Setting.Temperature, Setting.TopP, Setting.TopK, Setting.MinP, Setting.Seed, Setting.FrequencyPenalty, Setting.PresencePenalty })
+            {
+                keys[setting.KeyName()] = setting;
+            }
+
+            return keys;
+        }
 
         /// <summary>
         /// Keys only a model request carries. A payload with "model" and a single sampling key must have one of these too:

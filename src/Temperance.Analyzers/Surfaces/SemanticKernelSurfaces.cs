@@ -30,13 +30,7 @@ namespace Temperance.Surfaces
         private static SurfaceDefinition WithExtensionData(SurfaceDefinition surface)
         {
             surface.BagMember = "ExtensionData";
-            return surface
-                .Key("temperature", Setting.Temperature)
-                .Key("top_p", Setting.TopP)
-                .Key("top_k", Setting.TopK)
-                .Key("seed", Setting.Seed)
-                .Key("frequency_penalty", Setting.FrequencyPenalty)
-                .Key("presence_penalty", Setting.PresencePenalty);
+            return surface.TradeNameKeys(Setting.Temperature, Setting.TopP, Setting.TopK, Setting.Seed, Setting.FrequencyPenalty, Setting.PresencePenalty);
         }
     }
 }

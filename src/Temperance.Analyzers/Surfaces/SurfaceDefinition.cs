@@ -63,6 +63,17 @@ namespace Temperance.Surfaces
             return this;
         }
 
+        /// <summary>Keys spelled as the settings' trade names (<c>temperature</c>, <c>top_p</c>, <c>frequency_penalty</c> …).</summary>
+        public SurfaceDefinition TradeNameKeys(params Setting[] settings)
+        {
+            foreach (var setting in settings)
+            {
+                Keys[setting.KeyName()] = setting;
+            }
+
+            return this;
+        }
+
         public SurfaceDefinition Sends(string clientType, params string[] methods)
         {
             SendSites.Add(new SendSite(clientType, methods));
