@@ -78,6 +78,22 @@ namespace Temperance.Extraction
                     continue;
                 }
 
+                // "thinking": { type = "enabled" }, "reasoning": { effort = "low" }: a mode one object down.
+                if (RawJsonSurface.ModeKeys.TryGetValue(property.Property.Name, out var mode) && mode.Member != null
+                    && ValueReader.Unwrap(assignment.Value) is IAnonymousObjectCreationOperation modeObject)
+                {
+                    instance.PayloadHasRequestShape = true;
+                    foreach (var inner in modeObject.Initializers)
+                    {
+                        if (inner is ISimpleAssignmentOperation { Target: IPropertyReferenceOperation member } innerAssignment && member.Property.Name == mode.Member)
+                        {
+                            instance.Request.Modes[mode.Mode] = new ModeValue(mode.Mode, ValueReader.ConstantName(innerAssignment.Value), ResponseShapeReader.Evidence(assignment.Syntax));
+                        }
+                    }
+
+                    continue;
+                }
+
                 SettingReader.ReadKey(RawJsonSurface.Keys, property.Property.Name, assignment.Value, assignment.Syntax, instance);
             }
         }

@@ -34,6 +34,7 @@ namespace Temperance.Extraction
         public string? ClientModelId { get; set; }
         public ResponseShape ResponseShape { get; set; }
         public string? ResponseShapeEvidence { get; set; }
+        public Dictionary<string, ModeValue> Modes { get; } = new Dictionary<string, ModeValue>(System.StringComparer.Ordinal);
         public IMethodSymbol? SendingCall { get; set; }
         public Location? SendingCallLocation { get; set; }
         public string? Adapter { get; set; }
@@ -74,6 +75,7 @@ namespace Temperance.Extraction
                 ClientModelId = ClientModelId,
                 ResponseShape = ResponseShape,
                 ResponseShapeEvidence = ResponseShapeEvidence,
+                Modes = new Dictionary<string, ModeValue>(Modes),
                 SendingCall = SendingCall,
                 SendingCallLocation = SendingCallLocation,
                 Adapter = Adapter,

@@ -86,6 +86,22 @@ namespace Temperance.Extraction
             {
                 ResponseShapeReader.Set(request, value);
             }
+            else if (surface.ModeMembers.TryGetValue(name, out var mode))
+            {
+                request.Modes[mode] = new ModeValue(mode, ValueReader.ConstantName(value), ResponseShapeReader.Evidence(syntax));
+            }
+            else if (surface.HasModeUnder(name) && ValueReader.Unwrap(value) is IObjectCreationOperation { Initializer: { } modeObject })
+            {
+                // ReasoningOptions = new ResponseReasoningOptions { ReasoningEffortLevel = … }: a mode one object down.
+                foreach (var element in modeObject.Initializers)
+                {
+                    if (element is ISimpleAssignmentOperation { Target: IPropertyReferenceOperation inner } innerAssignment
+                        && surface.ModeMembers.TryGetValue(name + "." + inner.Property.Name, out var innerMode))
+                    {
+                        request.Modes[innerMode] = new ModeValue(innerMode, ValueReader.ConstantName(innerAssignment.Value), ResponseShapeReader.Evidence(innerAssignment.Syntax));
+                    }
+                }
+            }
             else if (surface.NestedMembers.Contains(name))
             {
                 if (ValueReader.Unwrap(value) is IObjectCreationOperation child && catalog.Find(child.Type) is { } childSurface)
@@ -148,6 +164,13 @@ namespace Temperance.Extraction
             {
                 instance.PayloadHasModel = true;
                 instance.Request.ModelId = ValueReader.ConstantString(value);
+                return;
+            }
+
+            if (instance.IsPayload && RawJsonSurface.ModeKeys.TryGetValue(key, out var mode) && mode.Member == null)
+            {
+                instance.PayloadHasRequestShape = true;
+                instance.Request.Modes[mode.Mode] = new ModeValue(mode.Mode, ValueReader.ConstantName(value), ResponseShapeReader.Evidence(syntax));
                 return;
             }
 

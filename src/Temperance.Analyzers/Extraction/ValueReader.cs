@@ -59,6 +59,31 @@ namespace Temperance.Extraction
             return null;
         }
 
+        /// <summary>
+        /// A constant name, lower case: a constant string (<c>"low"</c>), or a static member or enum value of a mode type
+        /// (<c>ChatReasoningEffortLevel.None</c> → "none"); null for anything computed.
+        /// </summary>
+        public static string? ConstantName(IOperation? operation)
+        {
+            if (ConstantString(operation) is { } text)
+            {
+                return text.Trim().ToLowerInvariant();
+            }
+
+            for (var current = operation; current != null; current = (current as IConversionOperation)?.Operand ?? (current as IParenthesizedOperation)?.Operand)
+            {
+                switch (current)
+                {
+                    case IPropertyReferenceOperation { Property.IsStatic: true } property:
+                        return property.Property.Name.ToLowerInvariant();
+                    case IFieldReferenceOperation { Field: { IsStatic: true } field } when field.IsConst || field.ContainingType?.TypeKind == TypeKind.Enum || field.IsReadOnly:
+                        return field.Name.ToLowerInvariant();
+                }
+            }
+
+            return null;
+        }
+
         public static IOperation? Unwrap(IOperation? operation)
         {
             while (true)

@@ -14,6 +14,7 @@ namespace Temperance.Model
     {
         private static readonly SettingWrite[] NoWrites = new SettingWrite[0];
         private static readonly TaskSignal[] NoSignals = new TaskSignal[0];
+        private static readonly IReadOnlyDictionary<string, ModeValue> NoModes = new Dictionary<string, ModeValue>();
 
         /// <summary>Provider key of the rules table (openai, ollama, generic, …).</summary>
         public string Provider { get; init; } = string.Empty;
@@ -43,6 +44,9 @@ namespace Temperance.Model
         public ResponseShape ResponseShape { get; init; }
         /// <summary>The response-format evidence as written, for messages ("ChatResponseFormat.CreateJsonSchemaFormat").</summary>
         public string? ResponseShapeEvidence { get; init; }
+
+        /// <summary>Modes the request is put in (<see cref="Modes"/>): reasoning effort, extended thinking.</summary>
+        public IReadOnlyDictionary<string, ModeValue> Modes { get; init; } = NoModes;
 
         /// <summary>The method the options are passed to, when visible.</summary>
         public IMethodSymbol? SendingCall { get; init; }

@@ -39,6 +39,32 @@ namespace Temperance.Policy
         /// <summary><c>temperance.model.&lt;family&gt;.rejects</c>: the settings the family rejects.</summary>
         public static string ModelRejects(string family) => $"{ModelPrefix}{family}.rejects";
 
+        /// <summary><c>temperance.model.&lt;family&gt;.provider</c>: the provider whose ranges apply when the request does not say (a raw payload).</summary>
+        public static string ModelProvider(string family) => $"{ModelPrefix}{family}.provider";
+
+        /// <summary><c>temperance.model.&lt;family&gt;.reasoning_default</c>: the reasoning effort when the request sets none.</summary>
+        public static string ModelReasoningDefault(string family) => $"{ModelPrefix}{family}.reasoning_default";
+
+        /// <summary><c>temperance.model.&lt;family&gt;.reasoning_rejects</c>: settings rejected at any reasoning effort but <c>none</c>.</summary>
+        public static string ModelReasoningRejects(string family) => $"{ModelPrefix}{family}.reasoning_rejects";
+
+        /// <summary><c>temperance.model.&lt;family&gt;.thinking_rejects</c>: settings rejected (other than at their default) with extended thinking on.</summary>
+        public static string ModelThinkingRejects(string family) => $"{ModelPrefix}{family}.thinking_rejects";
+
+        /// <summary><c>temperance.model.&lt;family&gt;.exclusive</c>: settings the model rejects when more than one of them is set.</summary>
+        public static string ModelExclusive(string family) => $"{ModelPrefix}{family}.exclusive";
+
+        /// <summary><c>temperance.model.&lt;family&gt;.recommended_temperature</c>: the publisher advises against a lower temperature (SAMP010).</summary>
+        public static string ModelRecommendedTemperature(string family) => $"{ModelPrefix}{family}.recommended_temperature";
+
+        public const string DeploymentPrefix = "temperance.deployment.";
+
+        /// <summary>
+        /// <c>temperance.deployment.&lt;name&gt; = &lt;model id&gt;</c>: a deployment or alias name the code uses in place of a model
+        /// id (<c>GetChatClient("extractor-prod")</c>). Matched case-insensitively (configuration keys are lower case).
+        /// </summary>
+        public static string Deployment(string name) => DeploymentPrefix + name.ToLowerInvariant();
+
         /// <summary><c>temperance.adapter.openai_chat.drops</c>: ChatOptions settings an IChatClient adapter ignores.</summary>
         public static string AdapterDrops(string adapter) => $"temperance.adapter.{adapter}.drops";
 
@@ -61,7 +87,8 @@ namespace Temperance.Policy
             "task\\.[a-z_]+\\.(temperature|max_temperature)",
             "provider\\.[a-z_]+\\.[a-z_]+\\.(min|max|default)",
             "provider\\.[a-z_]+\\.unset_means_default",
-            "model\\.[a-z0-9_]+\\.(match|rejects|except)",
+            "model\\.[a-z0-9_]+\\.(match|rejects|except|provider|reasoning_default|reasoning_rejects|thinking_rejects|exclusive|recommended_temperature)",
+            "deployment\\.[^\\s]+",
             "adapter\\.[a-z0-9_]+\\.(drops|drops_bag_keys)",
             "surface\\.[a-z0-9_]+\\.(type|provider|temperature|top_p|top_k|seed|candidates|model|response_format|sends)",
         };

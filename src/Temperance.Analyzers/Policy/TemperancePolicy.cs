@@ -239,13 +239,16 @@ namespace Temperance.Policy
                 return known;
             }
 
+            // The most specific family wins: "gpt-5." (effort-aware) over "gpt-5" over "gpt-".
             ModelFamily? found = null;
+            var best = -1;
             foreach (var family in Families())
             {
-                if (family.Matches(modelId))
+                var length = family.MatchLength(modelId);
+                if (length > best)
                 {
+                    best = length;
                     found = family;
-                    break;
                 }
             }
 
@@ -273,22 +276,33 @@ namespace Temperance.Policy
             foreach (var name in names)
             {
                 TryGetRaw(OptionKeys.ModelMatch(name), out var match);
-                TryGetRaw(OptionKeys.ModelRejects(name), out var rejects);
-                var settings = new List<Setting>();
-                foreach (var item in Split(rejects))
+                TryGetRaw(OptionKeys.ModelExcept(name), out var except);
+                var family = new ModelFamily(name, Split(match).ToArray(), SettingList(OptionKeys.ModelRejects(name)), OptionKeys.ModelMatch(name), Split(except).ToArray())
                 {
-                    var setting = SettingNames.Parse(item);
-                    if (setting == null)
-                    {
-                        AddProblem(new ConfigProblem(OptionKeys.ModelRejects(name), rejects, "a comma-separated list of settings such as temperature, top_p"));
-                        continue;
-                    }
-
-                    settings.Add(setting.Value);
+                    ReasoningRejects = SettingList(OptionKeys.ModelReasoningRejects(name)),
+                    ThinkingRejects = SettingList(OptionKeys.ModelThinkingRejects(name)),
+                    Exclusive = SettingList(OptionKeys.ModelExclusive(name)),
+                    RecommendedTemperature = Number(OptionKeys.ModelRecommendedTemperature(name)),
+                };
+                if (TryGetRaw(OptionKeys.ModelReasoningDefault(name), out var effort) && effort.Length > 0)
+                {
+                    family.ReasoningDefault = effort.ToLowerInvariant();
                 }
 
-                TryGetRaw(OptionKeys.ModelExcept(name), out var except);
-                found.Add(new ModelFamily(name, Split(match).ToArray(), settings, OptionKeys.ModelMatch(name), Split(except).ToArray()));
+                if (TryGetRaw(OptionKeys.ModelProvider(name), out var provider) && provider.Length > 0)
+                {
+                    // Any provider the rules table has a temperature default for (a family may name one no SDK surface uses).
+                    if (Default(provider, Setting.Temperature) != null)
+                    {
+                        family.Provider = provider;
+                    }
+                    else
+                    {
+                        AddProblem(new ConfigProblem(OptionKeys.ModelProvider(name), provider, "a provider with rows in the rules table (temperance.provider.<name>.temperature.default)"));
+                    }
+                }
+
+                found.Add(family);
             }
 
             lock (gate)
@@ -296,6 +310,41 @@ namespace Temperance.Policy
                 families ??= found;
                 return families;
             }
+        }
+
+        /// <summary>A comma-separated list of settings; a name that is not one is SAMP100 and left out.</summary>
+        private IReadOnlyList<Setting> SettingList(string key)
+        {
+            TryGetRaw(key, out var raw);
+            var settings = new List<Setting>();
+            foreach (var item in Split(raw))
+            {
+                if (SettingNames.Parse(item) is { } setting)
+                {
+                    settings.Add(setting);
+                }
+                else
+                {
+                    AddProblem(new ConfigProblem(key, raw, "a comma-separated list of settings such as temperature, top_p"));
+                }
+            }
+
+            return settings;
+        }
+
+        /// <summary>
+        /// The model a request goes to: its constant id, or what a deployment or alias name maps to
+        /// (<c>temperance.deployment.&lt;name&gt;</c>), with where the mapping came from; null when unknown.
+        /// </summary>
+        public (string Id, string? MappedBy)? ResolveModel(string? modelId)
+        {
+            if (string.IsNullOrEmpty(modelId))
+            {
+                return null;
+            }
+
+            var key = OptionKeys.Deployment(modelId!);
+            return TryGetRaw(key, out var mapped) && mapped.Length > 0 ? (mapped, key) : (modelId!, (string?)null);
         }
 
         private static void AddFamilyNames(AnalyzerConfigOptions options, SortedSet<string> names)

@@ -85,6 +85,12 @@ namespace Temperance.Rules
             Sampling, DiagnosticSeverity.Warning,
             "Temperature divides the logits before the softmax; far above 1 the distribution flattens toward uniform and the output degrades toward noise.");
 
+        public static readonly DiagnosticDescriptor AdvisedAgainst = Create(
+            "SAMP010", "Value the model's publisher advises against",
+            "{0} = {1} is below {2}, the value the publisher advises keeping for {3} ({4})",
+            Compatibility, DiagnosticSeverity.Warning,
+            "Some publishers advise against moving a setting away from a value for a model: below it the model may loop or degrade. The request is accepted, so nothing fails; the output just gets worse.");
+
         public static readonly DiagnosticDescriptor InvalidConfiguration = Create(
             "SAMP100", "Invalid Temperance configuration",
             "Temperance configuration '{0}' has the value '{1}'; expected {2}. The rule that needs it is skipped until this is fixed.",

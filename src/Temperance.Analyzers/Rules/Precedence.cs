@@ -51,6 +51,8 @@ namespace Temperance.Rules
                 "when one of the two cancels the other they do not fight: the inert one is named"),
             new Entry(Descriptors.SettingRejectedOrDropped, Descriptors.TemperatureAndTopPBothChanged, Scope.SharedWrite,
                 "a setting the model rejects or the adapter drops is not in force, so it does not fight the other"),
+            new Entry(Descriptors.SettingRejectedOrDropped, Descriptors.AdvisedAgainst, Scope.SharedWrite,
+                "a temperature the model rejects or the adapter drops is removed, not raised"),
             new Entry(Descriptors.RandomSamplingInExactTest, Descriptors.MissingSeed, Scope.SameRequest,
                 "in a test comparing exact output with random sampling, the fix sets temperature 0 and the seed together"),
         };

@@ -41,6 +41,17 @@ namespace Temperance.Rules
                 why += $"; {request.Surface} has no seed, so even temperature 0 is only best effort";
             }
 
+            // A model that takes no temperature, or whose publisher advises keeping one, gets guidance instead of a value.
+            if (!input.TemperatureIsTunable)
+            {
+                var because = input.ModelRejects(Setting.Temperature) ? "takes no temperature"
+                    : $"should keep temperature {FixProperties.Show(input.Family!.RecommendedTemperature!.Value.Value)} (its publisher's advice)";
+                yield return new Finding(Descriptors.RandomSamplingInExactTest, request.SendingCallLocation, new FixPlan(),
+                    $"{request.ExactAssertion} in '{request.ExactAssertionIn ?? request.Context.Member?.Name}'",
+                    $"{why}; {input.ModelText} {because}, so compare tolerantly (parse the answer and check its fields, a schema or a semantic check) or replay a recorded response");
+                yield break;
+            }
+
             var seed = policy.TestSeed?.Value ?? 0;
             var fix = new FixPlan();
             // A test_seed that is not a number is reported (SAMP100); the fix then sets temperature only, never a stand-in seed.

@@ -12,6 +12,11 @@ namespace Temperance.Rules
         /// <summary>The task's table temperature when a task is known (inferred or configured), else the neutral 1.0.</summary>
         public static Limit Temperature(RuleInput input)
         {
+            if (input.Family?.RecommendedTemperature is { } advised)
+            {
+                return advised; // the publisher's value for this model wins over any task value
+            }
+
             if (input.Task is { } task && input.Policy.TaskTemperatureOf(task.Kind) is { } value)
             {
                 return value;

@@ -47,6 +47,7 @@ namespace Temperance.Rules
             new RuleDefinition(Descriptors.RandomSamplingInExactTest, RandomSamplingInTestRule.Evaluate, dependsOnCallSite: true),
             new RuleDefinition(Descriptors.MissingSeed, MissingSeedRule.Evaluate, dependsOnCallSite: true),
             new RuleDefinition(Descriptors.SettingRejectedOrDropped, RejectedSettingRule.Evaluate, dependsOnCallSite: true),
+            new RuleDefinition(Descriptors.AdvisedAgainst, AdvisedAgainstRule.Evaluate, dependsOnCallSite: true),
             new RuleDefinition(Descriptors.TemperatureAndTopPBothChanged, TemperatureAndTopPRule.Evaluate),
             new RuleDefinition(Descriptors.InertSetting, InertSettingRule.Evaluate),
         };

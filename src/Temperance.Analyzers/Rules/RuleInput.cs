@@ -1,3 +1,4 @@
+using System.Linq;
 using Temperance.Model;
 using Temperance.Policy;
 
@@ -17,6 +18,70 @@ namespace Temperance.Rules
             Request = extracted.Request;
             Anchors = extracted.Anchors;
             Policy = policy;
+            if (policy.ResolveModel(Request.EffectiveModelId) is { } model)
+            {
+                ModelId = model.Id;
+                ModelMappedBy = model.MappedBy;
+                Family = policy.FamilyOf(model.Id);
+            }
+
+            // A provider-agnostic request (a raw payload, ChatOptions) to a model of a known family is judged on that
+            // provider's ranges: { model = "gpt-4o-mini", temperature = 2.8 } is out of OpenAI's range, not merely extreme.
+            RangeProvider = Request.Provider == Surfaces.Providers.Generic && Family?.Provider is { } inferred ? inferred : Request.Provider;
+        }
+
+        /// <summary>The model the request goes to, after deployment/alias mapping; null when not constant.</summary>
+        public string? ModelId { get; }
+        /// <summary>The <c>temperance.deployment.*</c> key that mapped the code's name to <see cref="ModelId"/>, if any.</summary>
+        public string? ModelMappedBy { get; }
+        public ModelFamily? Family { get; }
+        /// <summary>The provider whose accepted ranges apply (the request's own, or its model family's for a generic request).</summary>
+        public string RangeProvider { get; }
+
+        /// <summary>The model as messages name it: "model 'o3-mini'" or "model 'o3-mini' (deployment 'extractor-prod', temperance.deployment.extractor-prod)".</summary>
+        public string ModelText => ModelMappedBy == null ? $"model '{ModelId}'" : $"model '{ModelId}' ('{Request.EffectiveModelId}' mapped by {ModelMappedBy})";
+
+        /// <summary>
+        /// The reasoning effort in force and what says so: as written, else the family's default; null when the family is
+        /// not a reasoning family or the written value is not constant.
+        /// </summary>
+        public (string Effort, string Evidence)? ReasoningEffort
+        {
+            get
+            {
+                if (Request.Modes.TryGetValue(Modes.ReasoningEffort, out var written))
+                {
+                    return written.Value == null ? null : (written.Value, written.Evidence);
+                }
+
+                return Family?.ReasoningDefault is { } fallback ? (fallback, $"the model's default reasoning effort '{fallback}'") : null;
+            }
+        }
+
+        /// <summary>True when the request turns extended thinking on, with the code that does.</summary>
+        public string? ThinkingEvidence =>
+            Request.Modes.TryGetValue(Modes.Thinking, out var thinking) && thinking.Value == "enabled" ? thinking.Evidence : null;
+
+        /// <summary>
+        /// Whether a fix may lower the temperature: the model takes one in this request, and its publisher does not advise
+        /// keeping a given value (Gemini 3: 1.0). Fixes never write a value the model rejects or its publisher advises against.
+        /// </summary>
+        public bool TemperatureIsTunable => !ModelRejects(Setting.Temperature) && Family?.RecommendedTemperature == null;
+
+        /// <summary>
+        /// Whether the model takes this setting at all in this request (not rejected always, nor in the mode it is in):
+        /// fixes never write a setting the model would reject.
+        /// </summary>
+        public bool ModelRejects(Setting setting)
+        {
+            if (Family == null)
+            {
+                return false;
+            }
+
+            return Family.RejectsSetting(setting)
+                || (Family.ReasoningRejects.Contains(setting) && ReasoningEffort is { } effort && effort.Effort != "none")
+                || (Family.ThinkingRejects.Contains(setting) && ThinkingEvidence != null);
         }
 
         public Request Request { get; }

@@ -17,8 +17,9 @@ namespace Temperance.Rules
                 yield break; // no task, or a task without a ceiling (creative, brainstorming)
             }
 
-            // A model that rejects temperature must not be asked for one (SAMP007 covers a temperature written anyway).
-            if (policy.FamilyOf(request.EffectiveModelId) is { } family && family.RejectsSetting(Setting.Temperature))
+            // A model that takes no temperature (SAMP007 covers one written anyway), or whose publisher advises keeping its
+            // default (SAMP010 covers a lower one), has nothing to tune down.
+            if (!input.TemperatureIsTunable)
             {
                 yield break;
             }

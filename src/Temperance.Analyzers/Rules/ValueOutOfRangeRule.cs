@@ -12,7 +12,7 @@ namespace Temperance.Rules
             var (request, policy) = (input.Request, input.Policy);
             foreach (var write in request.Writes)
             {
-                if (write.Kind != ValueKind.Known || policy.Range(request.Provider, write.Setting) is not { } range)
+                if (write.Kind != ValueKind.Known || policy.Range(input.RangeProvider, write.Setting) is not { } range)
                 {
                     continue;
                 }
@@ -39,7 +39,7 @@ namespace Temperance.Rules
 
                 yield return new Finding(
                     Descriptors.ValueOutOfRange, write.Location, new FixPlan().SetValue(write, fixValue),
-                    write.Member, FixProperties.Show(write.Value) + Notes.Origin(write), RangeText(range.Min, range.Max), request.Provider,
+                    write.Member, FixProperties.Show(write.Value) + Notes.Origin(write), RangeText(range.Min, range.Max), input.RangeProvider,
                     write.Setting.KeyName(), limit.Key, Notes.Conditional(write)).About(write);
             }
         }

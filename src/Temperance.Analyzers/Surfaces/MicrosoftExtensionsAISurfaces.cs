@@ -17,6 +17,7 @@ namespace Temperance.Surfaces
                 .OpenAIShape()
                 .Map("TopK", Setting.TopK)
                 .Map("Seed", Setting.Seed)
+                .Mode("Reasoning.Effort", Modes.ReasoningEffort)
                 // Keys adapters read from AdditionalProperties: OllamaSharp's option names, Betalgo's "N".
                 .TradeNameKeys(Setting.Temperature, Setting.TopP, Setting.TopK, Setting.MinP, Setting.Seed)
                 .Key("repeat_penalty", Setting.RepetitionPenalty)

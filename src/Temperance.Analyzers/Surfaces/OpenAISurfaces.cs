@@ -18,11 +18,13 @@ namespace Temperance.Surfaces
             new SurfaceDefinition("OpenAI.Chat.ChatCompletionOptions", Providers.OpenAI) { ResponseFormatMember = "ResponseFormat" }
                 .OpenAIShape()
                 .Map("Seed", Setting.Seed)
+                .Mode("ReasoningEffortLevel", Modes.ReasoningEffort)
                 .Sends("OpenAI.Chat.ChatClient", "CompleteChat", "CompleteChatAsync", "CompleteChatStreaming", "CompleteChatStreamingAsync"),
             // Responses API: no seed, no penalties; the model sits on the options.
             new SurfaceDefinition("OpenAI.Responses.CreateResponseOptions", Providers.OpenAI) { ModelMember = "Model", ResponseFormatMember = "TextOptions" }
                 .Map("Temperature", Setting.Temperature)
                 .Map("TopP", Setting.TopP)
+                .Mode("ReasoningOptions.ReasoningEffortLevel", Modes.ReasoningEffort)
                 .Sends("OpenAI.Responses.ResponsesClient", "CreateResponse", "CreateResponseAsync", "CreateResponseStreaming", "CreateResponseStreamingAsync"),
             // Assistants spell top-p as NucleusSamplingFactor.
             new SurfaceDefinition("OpenAI.Assistants.AssistantCreationOptions", Providers.OpenAI) { ResponseFormatMember = "ResponseFormat" }

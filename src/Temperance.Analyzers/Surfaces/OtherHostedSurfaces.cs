@@ -17,6 +17,7 @@ namespace Temperance.Surfaces
                 .OpenAIShape()
                 .Map("Seed", Setting.Seed)
                 .Map("N", Setting.Candidates)
+                .Mode("ReasoningEffort", Modes.ReasoningEffort)
                 .Sends("Betalgo.Ranul.OpenAI.Interfaces.IChatCompletionService", "CreateCompletion", "CreateCompletionAsStream")
                 .Sends("Betalgo.Ranul.OpenAI.Interfaces.IChatCompletionServiceExtension", "Create"),
             // Anthropic 13.x has no sampling members (an empty member map); the request is still recognised (model, structured output).

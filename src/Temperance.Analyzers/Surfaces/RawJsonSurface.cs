@@ -50,6 +50,14 @@ namespace Temperance.Surfaces
         /// <summary>Ollama's native API nests sampling under this key: <c>new { model, options = new { temperature } }</c>.</summary>
         public const string NestedOptionsKey = "options";
 
+        /// <summary>Keys that put a request in a mode: a string value, or a nested object and the member that holds it.</summary>
+        public static readonly IReadOnlyDictionary<string, (string Mode, string? Member)> ModeKeys = new Dictionary<string, (string, string?)>(StringComparer.Ordinal)
+        {
+            ["reasoning_effort"] = (Modes.ReasoningEffort, null), // chat completions
+            ["reasoning"] = (Modes.ReasoningEffort, "effort"),    // responses: "reasoning": { "effort": "low" }
+            ["thinking"] = (Modes.Thinking, "type"),              // messages: "thinking": { "type": "enabled", "budget_tokens": … }
+        };
+
         /// <summary>Keys that say what shape of answer a payload asks for.</summary>
         public static readonly HashSet<string> FormatKeys = new HashSet<string>(StringComparer.Ordinal) { "response_format", "format" };
 

@@ -23,7 +23,8 @@ namespace Temperance.Surfaces
                     ResponseFormatMember = "ResponseFormat",
                 }
                 .OpenAIShape()
-                .Map("Seed", Setting.Seed)),
+                .Map("Seed", Setting.Seed)
+                .Mode("ReasoningEffort", Modes.ReasoningEffort)),
         };
 
         // Keys SK's ToChatOptions reads from ExtensionData, case-insensitively.

@@ -48,6 +48,32 @@ namespace Temperance.Surfaces
         /// </summary>
         public List<SendSite> SendSites { get; } = new List<SendSite>();
 
+        /// <summary>
+        /// Members that put the request in a mode (<see cref="Model.Modes"/>), by path: <c>ReasoningEffortLevel</c>, or
+        /// <c>ReasoningOptions.ReasoningEffortLevel</c> for a member of an object the options create.
+        /// </summary>
+        public Dictionary<string, string> ModeMembers { get; } = new Dictionary<string, string>(StringComparer.Ordinal);
+
+        /// <summary>True when a mode member lives in the object a member holds (<c>ReasoningOptions.…</c>).</summary>
+        public bool HasModeUnder(string member)
+        {
+            foreach (var path in ModeMembers.Keys)
+            {
+                if (path.Length > member.Length && path[member.Length] == '.' && path.StartsWith(member, StringComparison.Ordinal))
+                {
+                    return true;
+                }
+            }
+
+            return false;
+        }
+
+        public SurfaceDefinition Mode(string memberPath, string mode)
+        {
+            ModeMembers[memberPath] = mode;
+            return this;
+        }
+
         /// <summary>True when a member or key of this surface carries the setting.</summary>
         public bool Carries(Setting setting) => Members.ContainsValue(setting) || Keys.ContainsValue(setting);
 
