@@ -12,7 +12,7 @@ using Temperance.Benchmarks;
 using Temperance.CodeFixes;
 
 // Usage: dotnet run -c Release --project tests/Temperance.Benchmarks [-- --lines 100000] [--serial] [--only-temperance]
-//        [--only dense|quiet|none] [--phases]
+//        [--only dense|quiet|none] [--phases] [--real-build [--real-build-runs 3]] [--real-build-only]
 var lines = args.SkipWhile(a => a != "--lines").Skip(1).Select(int.Parse).DefaultIfEmpty(100_000).First();
 Console.WriteLine($"Temperance benchmark: {lines:N0} lines, {Environment.ProcessorCount} cores, {RuntimeInformationText()}");
 
@@ -20,6 +20,13 @@ var framework = Basic.Reference.Assemblies.Net100.References.All.Cast<MetadataRe
 var sdks = new[] { "OpenAI", "System.ClientModel", "System.Memory.Data", "Microsoft.Extensions.AI.Abstractions", "OllamaSharp" }
     .Select(n => MetadataReference.CreateFromFile(Path.Combine(AppContext.BaseDirectory, n + ".dll"))).Cast<MetadataReference>().ToList();
 var onlyTemperance = args.Contains("--only-temperance");
+// The second harness (real dotnet build of three projects): minutes at 100,000 lines, so only when asked for.
+var realBuildRuns = args.SkipWhile(a => a != "--real-build-runs").Skip(1).Select(int.Parse).DefaultIfEmpty(3).First();
+if (args.Contains("--real-build-only"))
+{
+    return RealBuild.Run(lines, realBuildRuns) == null ? 1 : 0;
+}
+
 const int Runs = 5; // each measurement is the median of this many runs
 var netAnalyzers = onlyTemperance ? ImmutableArray<DiagnosticAnalyzer>.Empty : LoadNetAnalyzers();
 var table = new Temperance.Inventory.RulesTableOptions(Temperance.Inventory.RulesTableOptions.FindTable());
@@ -61,6 +68,12 @@ Console.WriteLine($"floor (dense): {dense.FloorMs / dense.CompileMs * 100:N1}% o
 Console.WriteLine($"target: no actions without an LLM SDK (none): {(none.TemperanceActions == 0 ? "met" : $"NOT met ({none.TemperanceActions} actions)")}");
 Console.WriteLine($"peak working set: {Process.GetCurrentProcess().PeakWorkingSet64 / (1024 * 1024):N0} MiB");
 await TimeCodeFix(framework.Concat(sdks).ToList(), table);
+if (args.Contains("--real-build"))
+{
+    return RealBuild.Run(lines, realBuildRuns) == null ? 1 : 0;
+}
+
+Console.WriteLine("real build (dotnet build, ReportAnalyzer): skipped; pass --real-build (or --real-build-only)");
 return 0;
 
 static async Task<Result> Measure(string name, List<string> sources, List<MetadataReference> references, ImmutableArray<DiagnosticAnalyzer> netAnalyzers, AnalyzerConfigOptionsProvider table)
