@@ -1,0 +1,248 @@
+using Temperance.Tests.Infrastructure;
+
+namespace Temperance.Tests.Rules;
+
+/// <summary>
+/// The model capability table (rules/temperance.globalconfig, "models"): each family row and mode condition on the real
+/// SDKs. Sources are cited next to each row in the table; the case each test stands for is named in the test.
+/// </summary>
+public class ModelCapabilityTests
+{
+    private const string OpenAIUsings = """
+        #pragma warning disable OPENAI001 // reasoning effort and the Responses API are [Experimental] in OpenAI 2.x
+        using System.ClientModel;
+        using System.Collections.Generic;
+        using OpenAI.Chat;
+
+        """;
+
+    // ---- OpenAI GPT-5.1 and later: sampling only at reasoning effort none (OpenAI GPT-5.2 guide) ----------------------
+
+    [Fact]
+    public async Task Gpt51_EffortNone_TakesTemperature_DoesNotTrigger()
+    {
+        // Regression: this was a false SAMP007 when every gpt-5 model counted as rejecting temperature.
+        await Verify.AnalyzerAsync(OpenAIUsings + """
+            class HarbourPlanner
+            {
+                void Plan(List<ChatMessage> messages)
+                {
+                    var chat = new ChatClient("gpt-5.1", new ApiKeyCredential("key"));
+                    var options = new ChatCompletionOptions { ReasoningEffortLevel = ChatReasoningEffortLevel.None, Temperature = 0.2f };
+                    chat.CompleteChat(messages, options);
+                }
+            }
+            """);
+    }
+
+    [Fact]
+    public async Task Gpt51_NoEffortWritten_DefaultsToNone_DoesNotTrigger()
+    {
+        await Verify.AnalyzerAsync(OpenAIUsings + """
+            class HarbourPlanner
+            {
+                void Plan(List<ChatMessage> messages)
+                {
+                    var chat = new ChatClient("gpt-5.2-mini", new ApiKeyCredential("key"));
+                    chat.CompleteChat(messages, new ChatCompletionOptions { Temperature = 0.2f });
+                }
+            }
+            """);
+    }
+
+    [Fact]
+    public async Task Gpt51_EffortLow_RejectsTemperature_NamingTheEffort()
+    {
+        await Verify.AnalyzerAsync(OpenAIUsings + """
+            class HarbourPlanner
+            {
+                void Plan(List<ChatMessage> messages)
+                {
+                    var chat = new ChatClient("gpt-5.1", new ApiKeyCredential("key"));
+                    var options = new ChatCompletionOptions { ReasoningEffortLevel = ChatReasoningEffortLevel.Low, {|#0:Temperature = 0.2f|} };
+                    chat.CompleteChat(messages, options);
+                }
+            }
+            """,
+            Verify.Diagnostic("SAMP007").WithLocation(0).WithMessage(
+                "Temperature is rejected by model 'gpt-5.1' (reasoning effort 'low' from ReasoningEffortLevel = ChatReasoningEffortLevel.Low; only effort 'none' takes it, temperance.model.openai_effort.reasoning_rejects)"));
+    }
+
+    [Fact]
+    public async Task ResponsesApi_EffortMedium_RejectsTopP()
+    {
+        await Verify.AnalyzerAsync("""
+            #pragma warning disable OPENAI001
+            using OpenAI.Responses;
+
+            class HarbourPlanner
+            {
+                CreateResponseOptions Options() => new CreateResponseOptions
+                {
+                    Model = "gpt-5.2",
+                    ReasoningOptions = new ResponseReasoningOptions { ReasoningEffortLevel = ResponseReasoningEffortLevel.Medium },
+                    {|SAMP007:TopP = 0.5f|},
+                };
+            }
+            """);
+    }
+
+    [Fact]
+    public async Task OSeries_RejectsPenalties_ButTakesTheirDefault()
+    {
+        // frequency/presence penalties: community reports only (see the table's source comment).
+        await Verify.AnalyzerAsync(OpenAIUsings + """
+            class HarbourPlanner
+            {
+                void Plan(List<ChatMessage> messages)
+                {
+                    var chat = new ChatClient("o3", new ApiKeyCredential("key"));
+                    chat.CompleteChat(messages, new ChatCompletionOptions { {|SAMP007:FrequencyPenalty = 0.5f|}, PresencePenalty = 0f });
+                }
+            }
+            """);
+    }
+
+    // ---- raw payloads: the provider and family come from the model id ----------------------------------------------
+
+    private const string PayloadUsings = """
+        using System.Net.Http;
+        using System.Net.Http.Json;
+        using System.Threading.Tasks;
+
+        """;
+
+    [Fact]
+    public async Task Payload_OpenAIModel_OutOfOpenAIsRange_IsSAMP005_NotExtreme()
+    {
+        await Verify.AnalyzerAsync(PayloadUsings + """
+            class TideDigest
+            {
+                Task<HttpResponseMessage> Send(HttpClient http) =>
+                    http.PostAsJsonAsync("v1/chat/completions", new { model = "gpt-4o-mini", {|#0:temperature = 2.8|}, messages = new[] { new { role = "user", content = "Summarise the tide table." } } });
+            }
+            """,
+            Verify.Diagnostic("SAMP005").WithLocation(0).WithMessage(
+                "\"temperature\" = 2.8 is outside the range [0, 2] that openai accepts for temperature (rules table: temperance.provider.openai.temperature.max)"));
+    }
+
+    [Fact]
+    public async Task Payload_ClaudeSonnet45_TemperatureAndTopPTogether_IsRejected_NotStyleAdvice()
+    {
+        await Verify.AnalyzerAsync(PayloadUsings + """
+            class TideDigest
+            {
+                Task<HttpResponseMessage> Send(HttpClient http) =>
+                    http.PostAsJsonAsync("v1/messages", new { model = "claude-sonnet-4-5-20250929", max_tokens = 400, temperature = 0.2, {|#0:top_p = 0.9|}, messages = new[] { new { role = "user", content = "Summarise the tide table." } } });
+            }
+            """,
+            Verify.Diagnostic("SAMP007").WithLocation(0).WithMessage(
+                "\"top_p\" together with \"temperature\" is rejected by model 'claude-sonnet-4-5-20250929' (family 'anthropic_one_of' takes only one of temperature, top_p, temperance.model.anthropic_one_of.exclusive)"));
+    }
+
+    [Fact]
+    public async Task Payload_ClaudeAfterOpus46_RejectsTemperatureOtherThanOne()
+    {
+        await Verify.AnalyzerAsync(PayloadUsings + """
+            class TideDigest
+            {
+                Task<HttpResponseMessage> Cool(HttpClient http) =>
+                    http.PostAsJsonAsync("v1/messages", new { model = "claude-opus-4-7", max_tokens = 400, {|SAMP007:temperature = 0.3|}, messages = new[] { new { role = "user", content = "Plan the berths." } } });
+
+                Task<HttpResponseMessage> Default(HttpClient http) =>
+                    http.PostAsJsonAsync("v1/messages", new { model = "claude-opus-4-7", max_tokens = 400, temperature = 1.0, messages = new[] { new { role = "user", content = "Plan the berths." } } });
+            }
+            """);
+    }
+
+    [Fact]
+    public async Task Payload_ExtendedThinking_RejectsTemperature_NamingTheMode()
+    {
+        await Verify.AnalyzerAsync(PayloadUsings + """
+            class TideDigest
+            {
+                Task<HttpResponseMessage> Send(HttpClient http) =>
+                    http.PostAsJsonAsync("v1/messages", new
+                    {
+                        model = "claude-3-7-sonnet-latest",
+                        max_tokens = 4000,
+                        thinking = new { type = "enabled", budget_tokens = 2000 },
+                        {|#0:temperature = 0.5|},
+                        messages = new[] { new { role = "user", content = "Plan the berths." } },
+                    });
+            }
+            """,
+            Verify.Diagnostic("SAMP007").WithLocation(0).WithMessage(
+                "\"temperature\" is rejected by model 'claude-3-7-sonnet-latest' (extended thinking is on (thinking = new { type = \"enabled\", budget_tokens = 2000 }), temperance.model.anthropic.thinking_rejects)"));
+    }
+
+    // ---- deployment names mapped in .editorconfig ------------------------------------------------------------------
+
+    private const string Deployment = OpenAIUsings + """
+        class HarbourPlanner
+        {
+            void Plan(Azure.AI.OpenAI.AzureOpenAIClient azure, List<ChatMessage> messages)
+            {
+                var chat = azure.GetChatClient("extractor-prod");
+                chat.CompleteChat(messages, new ChatCompletionOptions { TEMPERATURE });
+            }
+        }
+        """;
+
+    [Fact]
+    public async Task DeploymentMappedToAReasoningModel_GetsItsFindings()
+    {
+        await Verify.AnalyzerAsync(Deployment.Replace("TEMPERATURE", "{|#0:Temperature = 0.2f|}"), "temperance.deployment.extractor-prod = o3-mini\n",
+            Verify.Diagnostic("SAMP007").WithLocation(0).WithMessage(
+                "Temperature is rejected by model 'o3-mini' ('extractor-prod' mapped by temperance.deployment.extractor-prod) (family 'openai_reasoning', temperance.model.openai_reasoning.match)"));
+    }
+
+    [Fact]
+    public async Task UnknownDeployment_GetsNoModelFinding()
+    {
+        await Verify.AnalyzerAsync(Deployment.Replace("TEMPERATURE", "Temperature = 0.2f"));
+    }
+
+    // ---- Gemini 3: the publisher advises keeping temperature 1.0 (Vertex AI Gemini 3 prompting guide) ------------------
+
+    [Fact]
+    public async Task Gemini3_ExtractionTask_NoCeilingFinding_OnlyThePublishersAdvice()
+    {
+        // SAMP001 would push the temperature down for an extraction; for Gemini 3 that is advice against the publisher's.
+        await Verify.AnalyzerAsync("""
+            using Microsoft.Extensions.AI;
+
+            class CargoManifest
+            {
+                ChatOptions Options() => new ChatOptions { ModelId = "gemini-3-pro-preview", {|SAMP010:Temperature = 0.9f|} };
+                ChatOptions AtOne() => new ChatOptions { ModelId = "gemini-3-pro-preview", Temperature = 1.0f };
+                ChatOptions OlderGemini() => new ChatOptions { ModelId = "gemini-2.5-flash", Temperature = 0.2f };
+            }
+            """, "temperance.task = extraction\n");
+    }
+
+    [Fact]
+    public async Task ExactTest_OnAModelWithoutTemperature_GivesGuidance_NotATemperature()
+    {
+        await Verify.AnalyzerAsync("""
+            using System.Collections.Generic;
+            using System.Threading.Tasks;
+            using OpenAI.Chat;
+            using Xunit;
+
+            public class BerthTests
+            {
+                private readonly ChatClient chat = new ChatClient("o3-mini", "key");
+
+                [Fact]
+                public async Task Berth_IsStable()
+                {
+                    ChatCompletion completion = await {|#0:chat.CompleteChatAsync(new List<ChatMessage> { new UserChatMessage("Which berth for the ferry?") })|};
+                    Assert.Equal("Berth 4", completion.Content[0].Text);
+                }
+            }
+            """,
+            Verify.Diagnostic("SAMP002").WithLocation(0).WithMessage(
+                "The test compares this model output exactly (Assert.Equal in 'Berth_IsStable') but sampling is random (temperature unset, so openai's default 1 applies; model 'o3-mini' takes no temperature, so compare tolerantly (parse the answer and check its fields, a schema or a semantic check) or replay a recorded response); the test passes or fails by chance"));
+    }
+}
