@@ -36,6 +36,8 @@ namespace Temperance.Rules
                 Inert(request, Setting.Temperature, v => v > 0, "top-p is 0: only the single most likely token is left to sample", inert);
             }
 
+            // An unset do_sample is not judged: its built-in default is false (greedy), but the model folder's genai_config.json
+            // decides for most models, and the analyzer cannot see it (rules table, onnx_genai.do_sample.default).
             if (request.Value(Setting.DoSample).Is(0))
             {
                 foreach (var setting in new[] { Setting.Temperature, Setting.TopP, Setting.TopK })
