@@ -89,7 +89,7 @@ public static class Formats
 
         var cells = report.Rows.Select(r => new[]
         {
-            Where(r, report.Info.Root), r.Sdk, r.Model ?? "-", r.Task ?? "-", Value(r.Setting("temperature")), Value(r.Setting("top_p")), Value(r.Setting("seed")),
+            Where(r, report.Info.Root), r.Sdk, r.Model == null ? "-" : r.Model + (r.Family == null ? string.Empty : $" ({r.Family})"), r.Task ?? "-", Value(r.Setting("temperature")), Value(r.Setting("top_p")), Value(r.Setting("seed")),
             Findings(r, f => $"{f.Id} {Lower(f.Severity)}: {f.Message}", "\n"),
         }).ToList();
         var widths = Columns.Select((c, i) => Math.Min(c.Max, Math.Max(c.Header.Length, cells.Select(l => Longest(l[i])).DefaultIfEmpty(0).Max()))).ToArray();
@@ -214,7 +214,7 @@ public static class Formats
         {
             var task = r.Task == null ? "-" : $"{r.Task} ({r.TaskEvidence})";
             var findings = Findings(r, f => $"{f.Id} {f.Message}", "<br>");
-            text.Append($"| `{Where(r, root)}` | {Escape(r.Sdk)} | {Escape(r.Model ?? "-")} | {Escape(task)} | {Escape(Value(r.Setting("temperature")))} | {Escape(Value(r.Setting("top_p")))} | {Escape(Value(r.Setting("seed")))} | {Escape(findings)} |")
+            text.Append($"| `{Where(r, root)}` | {Escape(r.Sdk)} | {Escape(r.ModelLine ?? "-")} | {Escape(task)} | {Escape(Value(r.Setting("temperature")))} | {Escape(Value(r.Setting("top_p")))} | {Escape(Value(r.Setting("seed")))} | {Escape(findings)} |")
                 .AppendLine(several ? $" {Escape(r.Project)} |" : string.Empty);
         }
 
@@ -259,6 +259,8 @@ public static class Formats
                 library = r.Library,
                 provider = r.Provider,
                 model = r.Model,
+                model_family = r.Family,
+                model_source = r.ModelSource,
                 task = r.Task == null ? null : new { kind = r.Task, evidence = r.TaskEvidence, ceiling = r.Ceiling, ceiling_key = r.CeilingKey },
                 settings = r.Settings.ToDictionary(s => s.Name, s => new { value = s.Value, source = s.Source, state = s.State }),
                 findings = r.Findings.Select(f => new

@@ -34,8 +34,12 @@ public sealed record FindingRow(string Id, string Severity, string Message, stri
 public sealed record RequestRow(
     string Project, string File, int Line, string Sdk, string Provider, string? Model,
     string? Task, string? TaskEvidence, IReadOnlyList<SettingRow> Settings, IReadOnlyList<FindingRow> Findings,
-    string? NotJudged = null, string Library = "", double? Ceiling = null, string? CeilingKey = null)
+    string? NotJudged = null, string Library = "", double? Ceiling = null, string? CeilingKey = null,
+    string? Family = null, string? ModelSource = null)
 {
+    /// <summary>The model, its family from the rules table and where both came from, in one line ("o3-mini, family openai_reasoning (the client; temperance.deployment.x)").</summary>
+    public string? ModelLine => Model == null ? null : Model + (Family == null ? string.Empty : $", family {Family}") + (ModelSource == null ? string.Empty : $" ({ModelSource})");
+
     public SettingRow Temperature => Settings.First(s => s.Name == "temperature");
 
     public SettingRow? Setting(string name) => Settings.FirstOrDefault(s => s.Name == name);

@@ -127,6 +127,27 @@ public partial class InventoryToolTests : IClassFixture<InventoryFixture>
     }
 
     [Fact]
+    public void Json_NamesTheModel_ItsFamily_AndWhereBothCameFrom()
+    {
+        var file = Path.Combine(tool.Output, "models.json");
+        var run = tool.Run($"\"{tool.Demo}\" --format json --output \"{file}\"");
+        Assert.True(run.ExitCode == 0, run.ToString());
+
+        using var json = JsonDocument.Parse(File.ReadAllText(file));
+        var requests = json.RootElement.GetProperty("requests").EnumerateArray().ToList();
+        JsonElement At(string name, int line) => requests.Single(r => r.GetProperty("file").GetString()!.EndsWith(name, StringComparison.Ordinal) && r.GetProperty("line").GetInt32() == line);
+
+        var planner = At("Tuning.cs", 24);
+        Assert.Equal("o4-mini", planner.GetProperty("model").GetString());
+        Assert.Equal("openai_reasoning", planner.GetProperty("model_family").GetString());
+        Assert.Equal("from the options; family from temperance.model.openai_reasoning.match", planner.GetProperty("model_source").GetString());
+
+        var lostLuggage = At("Program.cs", 37);
+        Assert.Equal("gpt-4o-mini", lostLuggage.GetProperty("model").GetString());
+        Assert.Equal("openai", lostLuggage.GetProperty("model_family").GetString());
+    }
+
+    [Fact]
     public void TableAndMarkdown_ShowTheSameRequests()
     {
         var table = tool.Run($"\"{tool.Demo}\"");
