@@ -103,6 +103,22 @@ public class ModelCapabilityTests
             """);
     }
 
+    [Fact]
+    public async Task RejectedTemperatureOutOfRange_IsOneFinding_TheRejection()
+    {
+        // One mistake, one warning: the model takes no temperature, so the fix removes it rather than clamping it.
+        await Verify.AnalyzerAsync(OpenAIUsings + """
+            class HarbourPlanner
+            {
+                void Plan(List<ChatMessage> messages)
+                {
+                    var chat = new ChatClient("o3", new ApiKeyCredential("key"));
+                    chat.CompleteChat(messages, new ChatCompletionOptions { {|SAMP007:Temperature = 3f|} });
+                }
+            }
+            """);
+    }
+
     // ---- raw payloads: the provider and family come from the model id ----------------------------------------------
 
     private const string PayloadUsings = """
