@@ -69,6 +69,7 @@ namespace Temperance.Extraction
             request.SendingCallLocation = send.Syntax.GetLocation();
             var client = ClientOf(send);
             request.ClientModelId = ClientModel(client);
+            request.Endpoint = ClientEndpoint(client);
             if ((scope.Catalog.AdapterOfSend(request.SendingCall) ?? ClientAdapter(client)) is { } adapter)
             {
                 request.Adapter = adapter.Name;
@@ -161,6 +162,53 @@ namespace Temperance.Extraction
 
             return null;
         }
+
+        /// <summary>The constant address the client is pointed at: an endpoint argument, or an Endpoint member of an options argument.</summary>
+        private string? ClientEndpoint(IOperation? client)
+        {
+            foreach (var link in Chain(client))
+            {
+                if (link is not IObjectCreationOperation creation)
+                {
+                    continue;
+                }
+
+                foreach (var argument in creation.Arguments)
+                {
+                    if (argument.Parameter != null && ClientShapes.EndpointParameterNames.Contains(argument.Parameter.Name) && Address(argument.Value) is { } direct)
+                    {
+                        return direct;
+                    }
+
+                    var value = ValueReader.Unwrap(argument.Value);
+                    if (value is ILocalReferenceOperation local)
+                    {
+                        value = ValueReader.Unwrap(scope.LocalInitializer(local.Local));
+                    }
+
+                    if (value is IObjectCreationOperation { Initializer: { } options })
+                    {
+                        foreach (var element in options.Initializers)
+                        {
+                            if (element is ISimpleAssignmentOperation { Target: IPropertyReferenceOperation member } assignment
+                                && ClientShapes.EndpointMembers.Contains(member.Property.Name) && Address(assignment.Value) is { } address)
+                            {
+                                return address;
+                            }
+                        }
+                    }
+                }
+            }
+
+            return null;
+        }
+
+        /// <summary><c>new Uri("…")</c> or a constant string.</summary>
+        private static string? Address(IOperation value) => ValueReader.Unwrap(value) switch
+        {
+            IObjectCreationOperation { Arguments.Length: >= 1 } uri when uri.Type?.Name == nameof(System.Uri) => ValueReader.ConstantString(uri.Arguments[0].Value),
+            var other => ValueReader.ConstantString(other),
+        };
 
         private static string? ModelArgument(IEnumerable<IArgumentOperation> arguments)
         {

@@ -32,6 +32,7 @@ namespace Temperance.Extraction
         public HashSet<Setting> UndeclaredSettings { get; } = new HashSet<Setting>();
         public string? ModelId { get; set; }
         public string? ClientModelId { get; set; }
+        public string? Endpoint { get; set; }
         public ResponseShape ResponseShape { get; set; }
         public string? ResponseShapeEvidence { get; set; }
         public Dictionary<string, ModeValue> Modes { get; } = new Dictionary<string, ModeValue>(System.StringComparer.Ordinal);
@@ -73,6 +74,7 @@ namespace Temperance.Extraction
                 UndeclaredSettings = UndeclaredSettings.ToImmutableHashSet(),
                 ModelId = ModelId,
                 ClientModelId = ClientModelId,
+                Endpoint = Endpoint,
                 ResponseShape = ResponseShape,
                 ResponseShapeEvidence = ResponseShapeEvidence,
                 Modes = new Dictionary<string, ModeValue>(Modes),

@@ -39,6 +39,8 @@ namespace Temperance.Model
         public string? ModelId { get; init; }
         /// <summary>The model id from the client that sends the request, when constant (<c>new ChatClient("gpt-4o", …)</c>).</summary>
         public string? ClientModelId { get; init; }
+        /// <summary>The server the client is pointed at, when constant (<c>http://localhost:11434/v1</c>).</summary>
+        public string? Endpoint { get; init; }
         /// <summary>The model id the request goes to: the options' own, else the client's.</summary>
         public string? EffectiveModelId => ModelId ?? ClientModelId;
         public ResponseShape ResponseShape { get; init; }

@@ -57,6 +57,14 @@ namespace Temperance.Policy
         /// <summary><c>temperance.model.&lt;family&gt;.recommended_temperature</c>: the publisher advises against a lower temperature (SAMP010).</summary>
         public static string ModelRecommendedTemperature(string family) => $"{ModelPrefix}{family}.recommended_temperature";
 
+        public const string EndpointPrefix = "temperance.endpoint.";
+
+        /// <summary><c>temperance.endpoint.&lt;name&gt;.match</c>: hosts (host or host:port) of servers of one kind.</summary>
+        public static string EndpointMatch(string name) => $"{EndpointPrefix}{name}.match";
+
+        /// <summary><c>temperance.endpoint.&lt;name&gt;.provider</c>: the provider a client pointed at such a server talks to.</summary>
+        public static string EndpointProvider(string name) => $"{EndpointPrefix}{name}.provider";
+
         public const string DeploymentPrefix = "temperance.deployment.";
 
         /// <summary>
@@ -89,6 +97,7 @@ namespace Temperance.Policy
             "provider\\.[a-z_]+\\.unset_means_default",
             "model\\.[a-z0-9_]+\\.(match|rejects|except|provider|reasoning_default|reasoning_rejects|thinking_rejects|exclusive|recommended_temperature)",
             "deployment\\.[^\\s]+",
+            "endpoint\\.[a-z0-9_]+\\.(match|provider)",
             "adapter\\.[a-z0-9_]+\\.(drops|drops_bag_keys)",
             "surface\\.[a-z0-9_]+\\.(type|provider|temperature|top_p|top_k|seed|candidates|model|response_format|sends)",
         };

@@ -347,6 +347,51 @@ namespace Temperance.Policy
             return TryGetRaw(key, out var mapped) && mapped.Length > 0 ? (mapped, key) : (modelId!, (string?)null);
         }
 
+        /// <summary>
+        /// The provider of the server an endpoint points at (<c>temperance.endpoint.&lt;name&gt;.match</c> hosts, compared with
+        /// the address's host and host:port), and the key that says so; null for an address no entry names.
+        /// </summary>
+        public (string Provider, string Key)? ProviderAt(string? endpoint)
+        {
+            if (endpoint == null || !System.Uri.TryCreate(endpoint, System.UriKind.Absolute, out var uri))
+            {
+                return null;
+            }
+
+            var host = uri.Host.ToLowerInvariant();
+            var hostPort = host + ":" + uri.Port.ToString(CultureInfo.InvariantCulture);
+            var names = new SortedSet<string>(StringComparer.Ordinal);
+            AddNames(treeOptions, OptionKeys.EndpointPrefix, ".match", names);
+            AddNames(globalOptions, OptionKeys.EndpointPrefix, ".match", names);
+            foreach (var name in names)
+            {
+                TryGetRaw(OptionKeys.EndpointMatch(name), out var match);
+                if (Split(match).Any(m => string.Equals(m, hostPort, StringComparison.OrdinalIgnoreCase) || string.Equals(m, host, StringComparison.OrdinalIgnoreCase))
+                    && TryGetRaw(OptionKeys.EndpointProvider(name), out var provider) && provider.Length > 0)
+                {
+                    if (Default(provider, Setting.Temperature) != null)
+                    {
+                        return (provider, OptionKeys.EndpointMatch(name));
+                    }
+
+                    AddProblem(new ConfigProblem(OptionKeys.EndpointProvider(name), provider, "a provider with rows in the rules table (temperance.provider.<name>.temperature.default)"));
+                }
+            }
+
+            return null;
+        }
+
+        private static void AddNames(AnalyzerConfigOptions options, string prefix, string suffix, SortedSet<string> names)
+        {
+            foreach (var key in OptionKeys.ListedKeys(options))
+            {
+                if (key.Length > prefix.Length + suffix.Length && key.StartsWith(prefix, StringComparison.Ordinal) && key.EndsWith(suffix, StringComparison.Ordinal))
+                {
+                    names.Add(key.Substring(prefix.Length, key.Length - prefix.Length - suffix.Length));
+                }
+            }
+        }
+
         private static void AddFamilyNames(AnalyzerConfigOptions options, SortedSet<string> names)
         {
             const string Suffix = ".match";

@@ -26,10 +26,10 @@ namespace Temperance.Rules
             }
             else if (temperature.Kind == ValueKind.Unset)
             {
-                var providerDefault = policy.Default(request.Provider, Setting.Temperature);
+                var providerDefault = policy.Default(input.Provider, Setting.Temperature);
                 why = providerDefault == null ? "temperature unset"
-                    : request.Provider == Surfaces.Providers.Generic ? $"temperature unset, so the provider's default (usually {FixProperties.Show(providerDefault.Value.Value)}) applies"
-                    : $"temperature unset, so {request.Provider}'s default {FixProperties.Show(providerDefault.Value.Value)} applies";
+                    : input.Provider == Surfaces.Providers.Generic ? $"temperature unset, so the provider's default (usually {FixProperties.Show(providerDefault.Value.Value)}) applies"
+                    : $"temperature unset, so {input.Provider}'s default {FixProperties.Show(providerDefault.Value.Value)} applies";
             }
             else
             {

@@ -25,10 +25,16 @@ namespace Temperance.Rules
                 Family = policy.FamilyOf(model.Id);
             }
 
+            // An OpenAI-compatible client pointed at a local runtime talks to that runtime: its ranges and defaults apply.
+            var atEndpoint = policy.ProviderAt(Request.Endpoint);
+            Provider = atEndpoint?.Provider ?? Request.Provider;
             // A provider-agnostic request (a raw payload, ChatOptions) to a model of a known family is judged on that
             // provider's ranges: { model = "gpt-4o-mini", temperature = 2.8 } is out of OpenAI's range, not merely extreme.
-            RangeProvider = Request.Provider == Surfaces.Providers.Generic && Family?.Provider is { } inferred ? inferred : Request.Provider;
+            RangeProvider = Provider == Surfaces.Providers.Generic && Family?.Provider is { } inferred ? inferred : Provider;
         }
+
+        /// <summary>The provider the request goes to: the endpoint's (a local runtime's address), else the surface's.</summary>
+        public string Provider { get; }
 
         /// <summary>The model the request goes to, after deployment/alias mapping; null when not constant.</summary>
         public string? ModelId { get; }

@@ -42,15 +42,15 @@ namespace Temperance.Rules
 
                     break;
 
-                case ValueKind.Unset when policy.UnsetMeansDefault(request.Provider)
-                    && policy.Default(request.Provider, Setting.Temperature) is { } providerDefault
+                case ValueKind.Unset when policy.UnsetMeansDefault(input.Provider)
+                    && policy.Default(input.Provider, Setting.Temperature) is { } providerDefault
                     && providerDefault.Value > ceiling.Value:
                     var fix = new FixPlan();
                     fix.AddUnset(input.Anchors, (Setting.Temperature, target));
 
                     yield return new Finding(
                         Descriptors.TemperatureAboveTaskCeiling, request.Location, fix,
-                        $"The unset temperature ({request.Provider} default {FixProperties.Show(providerDefault.Value)}, {providerDefault.Key})",
+                        $"The unset temperature ({input.Provider} default {FixProperties.Show(providerDefault.Value)}, {providerDefault.Key})",
                         FixProperties.Show(ceiling.Value), task.Kind, "task " + task.Because, ceiling.Key);
                     break;
             }

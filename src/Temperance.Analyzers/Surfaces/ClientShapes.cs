@@ -14,6 +14,13 @@ namespace Temperance.Surfaces
             "model", "modelId", "deploymentName", "defaultModel", "defaultModelId",
         };
 
+        /// <summary>
+        /// Where a client is pointed at a server: a member of its options (<c>OpenAIClientOptions.Endpoint</c>) or a
+        /// constructor parameter (<c>new AzureOpenAIClient(endpoint, …)</c>), given a constant <c>new Uri("…")</c> or string.
+        /// </summary>
+        public static readonly HashSet<string> EndpointMembers = new HashSet<string>(System.StringComparer.Ordinal) { "Endpoint" };
+        public static readonly HashSet<string> EndpointParameterNames = new HashSet<string>(System.StringComparer.Ordinal) { "endpoint", "uri", "baseUri" };
+
         /// <summary>Client factories are <c>Get…Client</c> (<c>GetChatClient("gpt-4o")</c>, <c>GetResponsesClient</c>): their first string is the model.</summary>
         public const string ClientFactoryPrefix = "Get";
         public const string ClientFactorySuffix = "Client";

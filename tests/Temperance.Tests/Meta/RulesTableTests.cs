@@ -92,6 +92,15 @@ public class RulesTableTests
             {
                 Assert.Contains(entry.Value, new[] { "auto", "always", "never" });
             }
+            else if (entry.Key.StartsWith("temperance.endpoint.", StringComparison.Ordinal))
+            {
+                // Hosts, and a provider the table has rows for.
+                Assert.False(string.IsNullOrWhiteSpace(entry.Value), entry.Key);
+                if (entry.Key.EndsWith(".provider", StringComparison.Ordinal))
+                {
+                    Assert.Contains(RulesTable.Entries, e => e.Key == $"temperance.provider.{entry.Value}.temperature.default");
+                }
+            }
             else if (!entry.Key.StartsWith("temperance.model.", StringComparison.Ordinal) && !entry.Key.EndsWith(".drops", StringComparison.Ordinal))
             {
                 Assert.True(double.TryParse(entry.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out _), entry.Key);

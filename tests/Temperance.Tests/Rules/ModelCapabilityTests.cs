@@ -119,6 +119,32 @@ public class ModelCapabilityTests
             """);
     }
 
+    [Fact]
+    public async Task OpenAIClientPointedAtOllama_IsJudgedOnOllamasRange_AnOtherAddressOnOpenAIs()
+    {
+        // Ollama sets no maximum temperature, so 2.5 is extreme (SAMP009) there; at OpenAI it is out of range (SAMP005).
+        await Verify.AnalyzerAsync(OpenAIUsings + """
+            using System;
+            using OpenAI;
+
+            class HarbourPlanner
+            {
+                void Local(List<ChatMessage> messages)
+                {
+                    var client = new OpenAIClient(new ApiKeyCredential("ollama"), new OpenAIClientOptions { Endpoint = new Uri("http://localhost:11434/v1") });
+                    client.GetChatClient("llama3.2").CompleteChat(messages, new ChatCompletionOptions { {|SAMP009:Temperature = 2.5f|} });
+                }
+
+                void Hosted(List<ChatMessage> messages)
+                {
+                    var options = new OpenAIClientOptions { Endpoint = new Uri("https://gateway.harbour.example/v1") };
+                    var client = new OpenAIClient(new ApiKeyCredential("key"), options);
+                    client.GetChatClient("gpt-4o-mini").CompleteChat(messages, new ChatCompletionOptions { {|SAMP005:Temperature = 2.5f|} });
+                }
+            }
+            """);
+    }
+
     // ---- raw payloads: the provider and family come from the model id ----------------------------------------------
 
     private const string PayloadUsings = """
