@@ -131,14 +131,14 @@ public static class Inventory
             .Distinct()
             .ToList();
         var ceiling = task?.Kind is { } taskKind ? policy.TaskCeiling(taskKind) : null;
-        // The model as the rules see it: the options' id, else the client's, then any deployment mapping; its family.
-        var resolved = policy.ResolveModel(request.EffectiveModelId);
-        var family = resolved is { } known ? policy.FamilyOf(known.Id) : null;
+        // The model, its family and the provider exactly as the rules see them.
+        var seen = new Temperance.Rules.RuleInput(new ExtractedRequest(request, FixAnchors.None), policy);
+        var family = seen.Family;
         var modelSource = request.EffectiveModelId == null ? null
-            : (request.ModelId != null ? "from the options" : "from the client") + (resolved?.MappedBy is { } mappedBy ? $"; '{request.EffectiveModelId}' mapped by {mappedBy}" : string.Empty)
+            : (request.ModelId != null ? "from the options" : "from the client") + (seen.ModelMappedBy is { } mappedBy ? $"; '{request.EffectiveModelId}' mapped by {mappedBy}" : string.Empty)
               + (family == null ? string.Empty : $"; family from {family.Key}");
         return new RequestRow(project.Name, span.Path, span.StartLinePosition.Line + 1, request.Surface, request.Provider,
-            resolved?.Id, task?.Kind, task?.Because, settings, findings, request.SilentBecause,
+            seen.ModelId, task?.Kind, task?.Because, settings, findings, request.SilentBecause,
             libraries.TryGetValue(request.Surface, out var library) ? library : request.Provider, ceiling?.Value, ceiling?.Key,
             family?.Name, modelSource);
     }

@@ -74,9 +74,12 @@ namespace Temperance.Extraction
             {
                 switch (current)
                 {
-                    case IPropertyReferenceOperation { Property.IsStatic: true } property:
-                        return property.Property.Name.ToLowerInvariant();
-                    case IFieldReferenceOperation { Field: { IsStatic: true } field } when field.IsConst || field.ContainingType?.TypeKind == TypeKind.Enum || field.IsReadOnly:
+                    // ChatReasoningEffortLevel.Low: a static member of its own type (an extensible enum), or an enum value. Any
+                    // other static (Settings.Effort, a static readonly read from the environment) is not a constant name.
+                    case IPropertyReferenceOperation { Property: { IsStatic: true } property } when SymbolEqualityComparer.Default.Equals(property.Type, property.ContainingType):
+                        return property.Name.ToLowerInvariant();
+                    case IFieldReferenceOperation { Field: { IsStatic: true } field }
+                        when field.ContainingType?.TypeKind == TypeKind.Enum || SymbolEqualityComparer.Default.Equals(field.Type, field.ContainingType):
                         return field.Name.ToLowerInvariant();
                 }
             }

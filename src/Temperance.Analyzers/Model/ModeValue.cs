@@ -7,6 +7,12 @@ namespace Temperance.Model
         public const string ReasoningEffort = "reasoning_effort";
         /// <summary>Extended thinking (enabled / disabled).</summary>
         public const string Thinking = "thinking";
+
+        /// <summary>The reasoning effort at which a model does not reason (and takes sampling settings where its family allows).</summary>
+        public const string NoReasoning = "none";
+
+        /// <summary>Values of the thinking mode that turn it on.</summary>
+        public static readonly string[] ThinkingOn = { "enabled" };
     }
 
     /// <summary>A mode a request is put in, as written: its value (lower case; null when not a constant) and the code that says so.</summary>

@@ -93,9 +93,15 @@ namespace Temperance.Model
             : Reach == Reach.Escapes && Context.InTestCode ? $"test code that never sends it ({ReachNote})"
             : null;
 
-        /// <summary>The effective value of a setting, worst branch (see <see cref="SettingValue.Effective"/>).</summary>
-        public SettingValue Value(Setting setting) =>
-            SettingValue.Effective(setting, Writes, OriginVisible && !UndeclaredSettings.Contains(setting));
+        /// <summary>The effective value of a setting, worst branch (see <see cref="SettingValue.Effective"/>), computed once per setting.</summary>
+        public SettingValue Value(Setting setting)
+        {
+            var cache = values ??= new SettingValue?[SettingNames.Count];
+            return cache[(int)setting] ??= SettingValue.Effective(setting, Writes, OriginVisible && !UndeclaredSettings.Contains(setting));
+        }
+
+        // Rules ask for the same few settings many times; a request is immutable, so the answers are too.
+        private SettingValue?[]? values;
 
         /// <summary>The last write of a setting in source order, or null when nobody writes it.</summary>
         public SettingWrite? LastWrite(Setting setting) => Value(setting).Last;

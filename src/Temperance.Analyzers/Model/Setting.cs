@@ -37,6 +37,9 @@ namespace Temperance.Model
         /// <summary>Every setting, made once (Enum.GetValues allocates a new array per call).</summary>
         private static readonly Setting[] AllSettings = (Setting[])System.Enum.GetValues(typeof(Setting));
 
+        /// <summary>How many settings there are (their values are 0 … Count - 1).</summary>
+        public static readonly int Count = AllSettings.Length;
+
         /// <summary>
         /// The setting a member of a settings type not declared in Surfaces most likely carries, by its name
         /// (<c>Temperature</c>, <c>TopP</c>, <c>top_k</c>, <c>RepeatPenalty</c> …); null for anything else.

@@ -46,12 +46,10 @@ namespace Temperance.Policy
         public Limit? RecommendedTemperature { get; set; }
 
         /// <summary>
-        /// A prefix matches at a word boundary: "o3" matches "o3", "o3-mini" and "o3.1", not "o30"; a prefix ending in '-'
-        /// or '.' matches anything after it; a trailing '*' in the table is allowed and means the same.
+        /// The length of the longest prefix that matches, or -1: the most specific family wins. A prefix matches at a word
+        /// boundary: "o3" matches "o3", "o3-mini" and "o3.1", not "o30"; a prefix ending in '-' or '.' matches anything
+        /// after it; a trailing '*' in the table is allowed and means the same.
         /// </summary>
-        public bool Matches(string modelId) => MatchLength(modelId) >= 0;
-
-        /// <summary>The length of the longest prefix that matches, or -1: the most specific family wins.</summary>
         public int MatchLength(string modelId)
         {
             if (LongestMatch(modelId, Exceptions) >= 0)

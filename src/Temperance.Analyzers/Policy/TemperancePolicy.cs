@@ -353,9 +353,38 @@ namespace Temperance.Policy
         /// </summary>
         public (string Provider, string Key)? ProviderAt(string? endpoint)
         {
-            if (endpoint == null || !System.Uri.TryCreate(endpoint, System.UriKind.Absolute, out var uri))
+            if (endpoint == null)
             {
                 return null;
+            }
+
+            // A file holds few distinct addresses; the entries are read once per address.
+            if (providerByEndpoint.TryGetValue(endpoint, out var known))
+            {
+                return known;
+            }
+
+            var found = FindProviderAt(endpoint);
+            providerByEndpoint.TryAdd(endpoint, found);
+            return found;
+        }
+
+        private readonly System.Collections.Concurrent.ConcurrentDictionary<string, (string Provider, string Key)?> providerByEndpoint =
+            new System.Collections.Concurrent.ConcurrentDictionary<string, (string Provider, string Key)?>(StringComparer.Ordinal);
+
+        private (string Provider, string Key)? FindProviderAt(string endpoint)
+        {
+            System.Uri uri;
+            try
+            {
+                if (!System.Uri.TryCreate(endpoint, System.UriKind.Absolute, out uri!))
+                {
+                    return null;
+                }
+            }
+            catch (Exception e) when (e is UriFormatException or ArgumentException)
+            {
+                return null; // a malformed host (IDN) on .NET Framework hosts: an unknown address
             }
 
             var host = uri.Host.ToLowerInvariant();

@@ -7,7 +7,8 @@ namespace Temperance.Rules
     /// <summary>
     /// SAMP003: no seed where a run must be reproducible: a test comparing exact output at temperature 0, an evaluation
     /// (LLM-as-judge) task, or everywhere with <c>temperance.require_seed = always</c>. Only on surfaces that have a seed.
-    /// A test comparing exact output at a random temperature is SAMP002's (<see cref="Precedence"/>).
+    /// A test comparing exact output is judged here only at temperature 0: at a random temperature it is SAMP002's, whose
+    /// fix sets the seed too (<see cref="Precedence"/>), and at an Unknown temperature nothing is judged.
     /// </summary>
     internal static class MissingSeedRule
     {
@@ -25,11 +26,11 @@ namespace Temperance.Rules
             {
                 why = $"the test '{request.ExactAssertionIn ?? request.Context.Member?.Name}' compares its exact output with {request.ExactAssertion}";
             }
-            else if (input.Task is { Kind: "evaluation" } task)
+            else if (request.ExactAssertion == null && input.Task is { Kind: "evaluation" } task)
             {
                 why = $"an evaluation task, {task.Because}, must grade the same answer the same way";
             }
-            else if (mode == "always")
+            else if (mode == "always" && !(request.Context.IsTest && request.ExactAssertion != null))
             {
                 why = $"'{OptionKeys.RequireSeed} = always'";
             }

@@ -55,6 +55,8 @@ namespace Temperance.Rules
                 "a setting the model rejects or the adapter drops is removed, not clamped"),
             new Entry(Descriptors.SettingRejectedOrDropped, Descriptors.ExtremeTemperature, Scope.SharedWrite,
                 "a temperature the model rejects or the adapter drops is removed, not lowered"),
+            new Entry(Descriptors.ValueOutOfRange, Descriptors.AdvisedAgainst, Scope.SharedWrite,
+                "a value the provider rejects is fixed first, to the value the publisher advises"),
             new Entry(Descriptors.SettingRejectedOrDropped, Descriptors.AdvisedAgainst, Scope.SharedWrite,
                 "a temperature the model rejects or the adapter drops is removed, not raised"),
             new Entry(Descriptors.RandomSamplingInExactTest, Descriptors.MissingSeed, Scope.SameRequest,

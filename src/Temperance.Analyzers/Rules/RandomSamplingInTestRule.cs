@@ -26,10 +26,10 @@ namespace Temperance.Rules
             }
             else if (temperature.Kind == ValueKind.Unset)
             {
-                var providerDefault = policy.Default(input.Provider, Setting.Temperature);
+                var providerDefault = policy.Default(input.RangeProvider, Setting.Temperature);
                 why = providerDefault == null ? "temperature unset"
-                    : input.Provider == Surfaces.Providers.Generic ? $"temperature unset, so the provider's default (usually {FixProperties.Show(providerDefault.Value.Value)}) applies"
-                    : $"temperature unset, so {input.Provider}'s default {FixProperties.Show(providerDefault.Value.Value)} applies";
+                    : input.RangeProvider == Surfaces.Providers.Generic ? $"temperature unset, so the provider's default (usually {FixProperties.Show(providerDefault.Value.Value)}) applies"
+                    : $"temperature unset, so {input.RangeProvider}'s default {FixProperties.Show(providerDefault.Value.Value)} applies";
             }
             else
             {

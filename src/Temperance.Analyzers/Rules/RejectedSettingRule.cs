@@ -73,9 +73,9 @@ namespace Temperance.Rules
                 return $"family '{family.Name}', {family.Key}";
             }
 
-            if (family.ReasoningRejects.Contains(setting) && input.ReasoningEffort is { } effort && effort.Effort != "none")
+            if (family.ReasoningRejects.Contains(setting) && input.ReasoningEffort is { } effort && effort.Effort != Modes.NoReasoning)
             {
-                return $"reasoning effort '{effort.Effort}' from {effort.Evidence}; only effort 'none' takes it, {OptionKeys.ModelReasoningRejects(family.Name)}";
+                return $"reasoning effort '{effort.Effort}' from {effort.Evidence}; only effort '{Modes.NoReasoning}' takes it, {OptionKeys.ModelReasoningRejects(family.Name)}";
             }
 
             if (family.ThinkingRejects.Contains(setting) && input.ThinkingEvidence is { } thinking)

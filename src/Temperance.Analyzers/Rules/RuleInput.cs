@@ -33,7 +33,10 @@ namespace Temperance.Rules
             RangeProvider = Provider == Surfaces.Providers.Generic && Family?.Provider is { } inferred ? inferred : Provider;
         }
 
-        /// <summary>The provider the request goes to: the endpoint's (a local runtime's address), else the surface's.</summary>
+        /// <summary>
+        /// The provider the request goes to: the endpoint's (a local runtime's address), else the surface's. Whether an unset
+        /// value is the provider's default is asked of this one (ChatOptions stay generic: client middleware may fill them).
+        /// </summary>
         public string Provider { get; }
 
         /// <summary>The model the request goes to, after deployment/alias mapping; null when not constant.</summary>
@@ -41,7 +44,7 @@ namespace Temperance.Rules
         /// <summary>The <c>temperance.deployment.*</c> key that mapped the code's name to <see cref="ModelId"/>, if any.</summary>
         public string? ModelMappedBy { get; }
         public ModelFamily? Family { get; }
-        /// <summary>The provider whose accepted ranges apply (the request's own, or its model family's for a generic request).</summary>
+        /// <summary>The provider whose ranges and defaults apply to written values (the request's own, or its model family's for a generic request).</summary>
         public string RangeProvider { get; }
 
         /// <summary>The model as messages name it: "model 'o3-mini'" or "model 'o3-mini' (deployment 'extractor-prod', temperance.deployment.extractor-prod)".</summary>
@@ -66,7 +69,7 @@ namespace Temperance.Rules
 
         /// <summary>True when the request turns extended thinking on, with the code that does.</summary>
         public string? ThinkingEvidence =>
-            Request.Modes.TryGetValue(Modes.Thinking, out var thinking) && thinking.Value == "enabled" ? thinking.Evidence : null;
+            Request.Modes.TryGetValue(Modes.Thinking, out var thinking) && System.Array.IndexOf(Modes.ThinkingOn, thinking.Value) >= 0 ? thinking.Evidence : null;
 
         /// <summary>
         /// Whether a fix may lower the temperature: the model takes one in this request, and its publisher does not advise
@@ -86,7 +89,7 @@ namespace Temperance.Rules
             }
 
             return Family.RejectsSetting(setting)
-                || (Family.ReasoningRejects.Contains(setting) && ReasoningEffort is { } effort && effort.Effort != "none")
+                || (Family.ReasoningRejects.Contains(setting) && ReasoningEffort is { } effort && effort.Effort != Modes.NoReasoning)
                 || (Family.ThinkingRejects.Contains(setting) && ThinkingEvidence != null);
         }
 

@@ -43,7 +43,7 @@ namespace Temperance.Rules
                     break;
 
                 case ValueKind.Unset when policy.UnsetMeansDefault(input.Provider)
-                    && policy.Default(input.Provider, Setting.Temperature) is { } providerDefault
+                    && policy.Default(input.RangeProvider, Setting.Temperature) is { } providerDefault
                     && providerDefault.Value > ceiling.Value:
                     var fix = new FixPlan();
                     fix.AddUnset(input.Anchors, (Setting.Temperature, target));

@@ -17,8 +17,8 @@ namespace Temperance.Rules
             var topP = request.Value(Setting.TopP);
             if (!temperature.IsKnown || !topP.IsKnown
                 || temperature.Value == 0 || topP.Value == 0 // greedy either way: they cannot fight
-                || policy.Default(input.Provider, Setting.Temperature) is not { } defaultTemperature
-                || policy.Default(input.Provider, Setting.TopP) is not { } defaultTopP
+                || policy.Default(input.RangeProvider, Setting.Temperature) is not { } defaultTemperature
+                || policy.Default(input.RangeProvider, Setting.TopP) is not { } defaultTopP
                 || temperature.Value == defaultTemperature.Value || topP.Value == defaultTopP.Value)
             {
                 yield break;
@@ -28,7 +28,7 @@ namespace Temperance.Rules
             var temperatureWrite = temperature.Last!;
             yield return new Finding(
                 Descriptors.TemperatureAndTopPBothChanged, topPWrite.Location, new FixPlan().Remove(topPWrite).Remove(temperatureWrite),
-                FixProperties.Show(temperature.Value), FixProperties.Show(topP.Value), input.Provider,
+                FixProperties.Show(temperature.Value), FixProperties.Show(topP.Value), input.RangeProvider,
                 FixProperties.Show(defaultTemperature.Value), FixProperties.Show(defaultTopP.Value)).About(topPWrite, temperatureWrite);
         }
     }

@@ -31,8 +31,10 @@ namespace Temperance.Rules
                     fixValue = tooLow ? System.Math.Ceiling(fixValue) : System.Math.Floor(fixValue);
                 }
 
-                // Clamping a temperature to a high maximum (2.0) would land on SAMP009; write the recommended value instead.
-                if (write.Setting == Setting.Temperature && policy.ExtremeTemperature is { } extreme && fixValue > extreme.Value)
+                // Clamping a temperature to a high maximum (2.0) would land on SAMP009, and clamping it below a value the
+                // publisher advises keeping would land on SAMP010: write the recommended value instead.
+                if (write.Setting == Setting.Temperature
+                    && ((policy.ExtremeTemperature is { } extreme && fixValue > extreme.Value) || input.Family?.RecommendedTemperature?.Value > fixValue))
                 {
                     fixValue = Recommended.Temperature(input).Value;
                 }

@@ -58,7 +58,7 @@ public class RulesTableTests
     [Fact]
     public void EveryValue_NamesItsSource()
     {
-        var tags = new[] { "[xml:", "[api:", "[il:", "[spec:", "[issues:", "[common practice, no source]", "[from memory]" };
+        var tags = new[] { "[xml:", "[api:", "[il:", "[spec:", "[issues:", "[paper:", "[common practice, no source]", "[from memory]" };
         var unsourced = RulesTable.Entries
             .Where(e => e.Key.StartsWith("temperance.", StringComparison.Ordinal))
             .Where(e => !tags.Any(t => e.Source.Contains(t, StringComparison.Ordinal)))

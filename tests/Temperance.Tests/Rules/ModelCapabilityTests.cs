@@ -104,6 +104,50 @@ public class ModelCapabilityTests
     }
 
     [Fact]
+    public async Task ReasoningEffortFromASettingsMember_IsUnknown_DoesNotTrigger()
+    {
+        // Regression (review): a static member of another type is not a constant effort name; the effort is Unknown.
+        await Verify.AnalyzerAsync(OpenAIUsings + """
+            static class PlannerSettings
+            {
+                public static ChatReasoningEffortLevel Effort { get; set; } = ChatReasoningEffortLevel.None;
+                public static readonly ChatReasoningEffortLevel Configured = new ChatReasoningEffortLevel(System.Environment.GetEnvironmentVariable("EFFORT") ?? "none");
+            }
+
+            class HarbourPlanner
+            {
+                void Plan(List<ChatMessage> messages)
+                {
+                    var chat = new ChatClient("gpt-5.1", new ApiKeyCredential("key"));
+                    chat.CompleteChat(messages, new ChatCompletionOptions { ReasoningEffortLevel = PlannerSettings.Effort, Temperature = 0.2f });
+                    chat.CompleteChat(messages, new ChatCompletionOptions { ReasoningEffortLevel = PlannerSettings.Configured, Temperature = 0.2f });
+                }
+            }
+            """);
+    }
+
+    [Fact]
+    public async Task Gemini3_NegativeTemperature_IsOutOfRange_AndTheFixWritesTheAdvisedValue()
+    {
+        // One mistake, one warning: SAMP005 stands for SAMP010, and its fix does not clamp to 0 (which SAMP010 would flag).
+        await Verify.FixAsync("""
+            using Microsoft.Extensions.AI;
+
+            class CargoManifest
+            {
+                ChatOptions Options() => new ChatOptions { ModelId = "gemini-3-pro-preview", {|SAMP005:Temperature = -0.5f|} };
+            }
+            """, """
+            using Microsoft.Extensions.AI;
+
+            class CargoManifest
+            {
+                ChatOptions Options() => new ChatOptions { ModelId = "gemini-3-pro-preview", Temperature = 1.0f };
+            }
+            """);
+    }
+
+    [Fact]
     public async Task RejectedTemperatureOutOfRange_IsOneFinding_TheRejection()
     {
         // One mistake, one warning: the model takes no temperature, so the fix removes it rather than clamping it.

@@ -136,4 +136,29 @@ public class SAMP003Tests
             """, suppressSdkExperimental: false);
         await test.RunAsync();
     }
+
+    [Fact]
+    public async Task ExactTestWithUnknownTemperature_RequireSeedAlways_DoesNotTrigger()
+    {
+        // Regression (review of the precedence table): a test comparing exact output is SAMP003's only at temperature 0;
+        // at an Unknown temperature neither SAMP002 nor SAMP003 judges it.
+        await Verify.AnalyzerAsync("""
+            using System.Threading.Tasks;
+            using Microsoft.Extensions.AI;
+            using Xunit;
+
+            public class DeckTests
+            {
+                private readonly IChatClient client = null!;
+
+                [Theory]
+                [InlineData(0.4f)]
+                public async Task Deck_IsStable(float t)
+                {
+                    var options = new ChatOptions { Temperature = t };
+                    Assert.Equal("B", (await client.GetResponseAsync("Deck?", options)).Text);
+                }
+            }
+            """, "temperance.require_seed = always\n");
+    }
 }
