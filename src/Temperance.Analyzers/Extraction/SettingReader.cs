@@ -167,10 +167,25 @@ namespace Temperance.Extraction
                 return;
             }
 
-            if (instance.IsPayload && RawJsonSurface.ModeKeys.TryGetValue(key, out var mode) && mode.Member == null)
+            if (instance.IsPayload && RawJsonSurface.ModeKeys.TryGetValue(key, out var mode))
             {
                 instance.PayloadHasRequestShape = true;
-                instance.Request.Modes[mode.Mode] = new ModeValue(mode.Mode, ValueReader.ConstantName(value), ResponseShapeReader.Evidence(syntax));
+                if (mode.Member == null)
+                {
+                    instance.Request.Modes[mode.Mode] = new ModeValue(mode.Mode, ValueReader.ConstantName(value), ResponseShapeReader.Evidence(syntax));
+                }
+                else if (ValueReader.Unwrap(value) is IObjectCreationOperation { Initializer: { } nested })
+                {
+                    // ["thinking"] = new Dictionary<string, object> { ["type"] = "enabled" }: the mode one object down.
+                    foreach (var element in nested.Initializers)
+                    {
+                        if (KeyedEntry(element) is { } entry && entry.Key == mode.Member)
+                        {
+                            instance.Request.Modes[mode.Mode] = new ModeValue(mode.Mode, ValueReader.ConstantName(entry.Value), ResponseShapeReader.Evidence(syntax));
+                        }
+                    }
+                }
+
                 return;
             }
 
@@ -190,7 +205,7 @@ namespace Temperance.Extraction
             if (keys.TryGetValue(key, out var setting))
             {
                 instance.PayloadSamplingKeys++;
-                instance.Request.AddRange(ValueReader.Read(setting, $"\"{key}\"", value, null, syntax.GetLocation()));
+                instance.Request.AddRange(ValueReader.Read(setting, $"\"{key}\"", value, null, syntax.GetLocation(), fromKey: true));
             }
         }
     }

@@ -17,7 +17,7 @@ namespace Temperance.Extraction
     internal static class ValueReader
     {
         /// <summary>One write per possible value: a conditional gives one per branch.</summary>
-        public static IEnumerable<SettingWrite> Read(Setting setting, string member, IOperation value, ITypeSymbol? targetType, Location location)
+        public static IEnumerable<SettingWrite> Read(Setting setting, string member, IOperation value, ITypeSymbol? targetType, Location location, bool fromKey = false)
         {
             var kind = NumericKindOf(targetType, value, setting);
             var branches = new List<(IOperation? op, bool conditional)>();
@@ -26,17 +26,17 @@ namespace Temperance.Extraction
             {
                 if (op == null)
                 {
-                    yield return new SettingWrite(setting, ValueKind.Unknown, 0, member, location, null, kind, conditional, null);
+                    yield return new SettingWrite(setting, ValueKind.Unknown, 0, member, location, null, kind, conditional, null, fromKey);
                     continue;
                 }
 
                 if (TryGetNumber(op, out var number, out var origin))
                 {
-                    yield return new SettingWrite(setting, ValueKind.Known, number, member, location, op.Syntax, kind, conditional, origin);
+                    yield return new SettingWrite(setting, ValueKind.Known, number, member, location, op.Syntax, kind, conditional, origin, fromKey);
                 }
                 else
                 {
-                    yield return new SettingWrite(setting, ValueKind.Unknown, 0, member, location, op.Syntax, kind, conditional, null);
+                    yield return new SettingWrite(setting, ValueKind.Unknown, 0, member, location, op.Syntax, kind, conditional, null, fromKey);
                 }
             }
         }

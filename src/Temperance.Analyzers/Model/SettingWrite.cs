@@ -9,8 +9,9 @@ namespace Temperance.Model
     internal sealed class SettingWrite
     {
         public SettingWrite(Setting setting, ValueKind kind, double value, string member, Location location,
-            SyntaxNode? valueSyntax, NumericKind literalKind, bool fromConditional, string? origin)
+            SyntaxNode? valueSyntax, NumericKind literalKind, bool fromConditional, string? origin, bool fromKey = false)
         {
+            FromKey = fromKey;
             Setting = setting;
             Kind = kind;
             Value = value;
@@ -35,6 +36,8 @@ namespace Temperance.Model
         /// <summary>The C# type a replacement literal must have.</summary>
         public NumericKind LiteralKind { get; }
         public bool FromConditional { get; }
+        /// <summary>Written under a string key (a bag entry, a payload key, a keyed method), not a typed member.</summary>
+        public bool FromKey { get; }
         /// <summary>Where a known value came from when it is not a literal here ("constant 'Hot'").</summary>
         public string? Origin { get; }
     }

@@ -50,7 +50,7 @@ namespace Temperance.Rules
                 var (drops, dropsBagKeys, key) = policy.AdapterDrops(adapter);
                 foreach (var write in request.Writes)
                 {
-                    var fromBag = write.Member.StartsWith("\"", System.StringComparison.Ordinal);
+                    var fromBag = write.FromKey;
                     if (write.Kind != ValueKind.Known || reported.Contains(write) || !(fromBag ? dropsBagKeys : drops.Contains(write.Setting)))
                     {
                         continue;

@@ -262,6 +262,30 @@ public class ModelCapabilityTests
                 "\"temperature\" is rejected by model 'claude-3-7-sonnet-latest' (extended thinking is on (thinking = new { type = \"enabled\", budget_tokens = 2000 }), temperance.model.anthropic.thinking_rejects)"));
     }
 
+    [Fact]
+    public async Task DictionaryPayload_ExtendedThinking_RejectsTemperature()
+    {
+        await Verify.AnalyzerAsync(PayloadUsings + """
+            using System.Collections.Generic;
+
+            class TideDigest
+            {
+                Task<HttpResponseMessage> Send(HttpClient http)
+                {
+                    var payload = new Dictionary<string, object>
+                    {
+                        ["model"] = "claude-3-7-sonnet-latest",
+                        ["max_tokens"] = 4000,
+                        ["thinking"] = new Dictionary<string, object> { ["type"] = "enabled", ["budget_tokens"] = 2000 },
+                        {|SAMP007:["temperature"] = 0.5|},
+                        ["messages"] = new object[0],
+                    };
+                    return http.PostAsJsonAsync("v1/messages", payload);
+                }
+            }
+            """);
+    }
+
     // ---- deployment names mapped in .editorconfig ------------------------------------------------------------------
 
     private const string Deployment = OpenAIUsings + """
