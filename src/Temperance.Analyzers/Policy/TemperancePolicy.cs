@@ -271,8 +271,8 @@ namespace Temperance.Policy
             var found = new List<ModelFamily>();
             // A plain loop over the keys: this runs once per file, and the LINQ chain it replaces showed in profiles.
             var names = new SortedSet<string>(StringComparer.Ordinal);
-            AddFamilyNames(treeOptions, names);
-            AddFamilyNames(globalOptions, names);
+            AddNames(treeOptions, OptionKeys.ModelPrefix, ".match", names);
+            AddNames(globalOptions, OptionKeys.ModelPrefix, ".match", names);
             foreach (var name in names)
             {
                 TryGetRaw(OptionKeys.ModelMatch(name), out var match);
@@ -410,6 +410,7 @@ namespace Temperance.Policy
             return null;
         }
 
+        /// <summary>The names of keyed entries (<c>prefix + name + suffix</c>) an options object lists: model families, endpoints.</summary>
         private static void AddNames(AnalyzerConfigOptions options, string prefix, string suffix, SortedSet<string> names)
         {
             foreach (var key in OptionKeys.ListedKeys(options))
@@ -417,19 +418,6 @@ namespace Temperance.Policy
                 if (key.Length > prefix.Length + suffix.Length && key.StartsWith(prefix, StringComparison.Ordinal) && key.EndsWith(suffix, StringComparison.Ordinal))
                 {
                     names.Add(key.Substring(prefix.Length, key.Length - prefix.Length - suffix.Length));
-                }
-            }
-        }
-
-        private static void AddFamilyNames(AnalyzerConfigOptions options, SortedSet<string> names)
-        {
-            const string Suffix = ".match";
-            foreach (var key in OptionKeys.ListedKeys(options))
-            {
-                if (key.Length > OptionKeys.ModelPrefix.Length + Suffix.Length
-                    && key.StartsWith(OptionKeys.ModelPrefix, StringComparison.Ordinal) && key.EndsWith(Suffix, StringComparison.Ordinal))
-                {
-                    names.Add(key.Substring(OptionKeys.ModelPrefix.Length, key.Length - OptionKeys.ModelPrefix.Length - Suffix.Length));
                 }
             }
         }

@@ -30,10 +30,13 @@ namespace Temperance.Surfaces
         public string? ReceiverType { get; }
 
         /// <summary>
-        /// Methods of <see cref="DeclaringType"/> that take ChatOptions themselves and convert them the same way (MCP's
-        /// <c>SampleAsync(messages, options)</c>): a request sent through one goes through this adapter.
+        /// Methods of <see cref="DeclaringType"/> that take <see cref="ConvertedOptions"/> themselves and convert them the same
+        /// way (MCP's <c>SampleAsync(messages, options)</c>): a request sent through one goes through this adapter.
         /// </summary>
         public string[] Sends { get; set; } = System.Array.Empty<string>();
+
+        /// <summary>The options type (metadata name) an adapter converts: what a send of <see cref="Sends"/> must be given.</summary>
+        public string ConvertedOptions { get; set; } = "Microsoft.Extensions.AI.ChatOptions";
     }
 
     internal static class AdapterSurfaces

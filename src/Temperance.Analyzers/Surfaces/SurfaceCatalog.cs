@@ -143,8 +143,9 @@ namespace Temperance.Surfaces
 
             foreach (var (adapter, declaring, _) in adapters)
             {
-                if (System.Array.IndexOf(adapter.Sends, method.Name) >= 0 && method.Parameters.Any(p => Find(p.Type) is { Provider: Providers.Generic })
-                    && SymbolEqualityComparer.Default.Equals(method.ContainingType.OriginalDefinition, declaring))
+                if (System.Array.IndexOf(adapter.Sends, method.Name) >= 0
+                    && SymbolEqualityComparer.Default.Equals(method.ContainingType.OriginalDefinition, declaring)
+                    && method.Parameters.Any(p => Find(p.Type)?.MetadataName == adapter.ConvertedOptions))
                 {
                     return adapter;
                 }

@@ -189,6 +189,73 @@ public class ModelCapabilityTests
             """);
     }
 
+    // ---- precision: the same requests in test code that never reaches a model stay silent, their live twins fire ----
+
+    [Fact]
+    public async Task EffortRejection_SentToASubstitute_DoesNotTrigger_ItsLiveTwinDoes()
+    {
+        await Verify.AnalyzerAsync("""
+            #pragma warning disable OPENAI001
+            using System.Threading.Tasks;
+            using NSubstitute;
+            using OpenAI.Responses;
+            using Xunit;
+
+            public class PlannerTests
+            {
+                [Fact]
+                public async Task Plan_AsksTheClient()
+                {
+                    var client = Substitute.For<ResponsesClient>();
+                    var options = new CreateResponseOptions
+                    {
+                        Model = "gpt-5.2",
+                        ReasoningOptions = new ResponseReasoningOptions { ReasoningEffortLevel = ResponseReasoningEffortLevel.Medium },
+                        TopP = 0.5f,
+                    };
+                    await client.CreateResponseAsync(options);
+                }
+            }
+
+            public class Planner
+            {
+                public Task Plan(ResponsesClient client) => client.CreateResponseAsync(new CreateResponseOptions
+                {
+                    Model = "gpt-5.2",
+                    ReasoningOptions = new ResponseReasoningOptions { ReasoningEffortLevel = ResponseReasoningEffortLevel.Medium },
+                    {|SAMP007:TopP = 0.5f|},
+                });
+            }
+            """);
+    }
+
+    [Fact]
+    public async Task PublisherAdvice_InASerialisationTest_DoesNotTrigger_ItsLiveTwinDoes()
+    {
+        await Verify.AnalyzerAsync("""
+            using System.Text.Json;
+            using System.Threading.Tasks;
+            using Microsoft.Extensions.AI;
+            using Xunit;
+
+            public class ManifestOptionsTests
+            {
+                [Fact]
+                public void Options_RoundTrip()
+                {
+                    var options = new ChatOptions { ModelId = "gemini-3-pro-preview", Temperature = 0.2f };
+                    Assert.Contains("0.2", JsonSerializer.Serialize(options));
+                }
+            }
+
+            public class CargoManifest
+            {
+                public Task<ChatResponse> Read(IChatClient client, string text) =>
+                    client.GetResponseAsync(text, new ChatOptions { ModelId = "gemini-3-pro-preview", {|SAMP010:Temperature = 0.2f|} });
+            }
+            """);
+    }
+
     // ---- raw payloads: the provider and family come from the model id ----------------------------------------------
 
     private const string PayloadUsings = """
