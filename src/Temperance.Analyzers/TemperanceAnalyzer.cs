@@ -6,6 +6,7 @@ using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Microsoft.CodeAnalysis.Operations;
 using Temperance.Extraction;
+using Temperance.Files;
 using Temperance.Model;
 using Temperance.Policy;
 using Temperance.Rules;
@@ -48,6 +49,11 @@ namespace Temperance
                 });
             }
 
+            // Settings files (prompt directories, YAML templates, agent definitions, front-matter prompts) hold requests too;
+            // they are judged whether or not an SDK is referenced here, since the loader may live in another project.
+            var tests = TestFrameworks.Resolve(context.Compilation, context.Options.AnalyzerConfigOptionsProvider.GlobalOptions);
+            context.RegisterAdditionalFileAction(file => SettingsFileAnalysis.Analyze(file, tests.InTestProject));
+
             var catalog = SurfaceCatalog.Resolve(context.Compilation, config.Surfaces, config.RawJson);
             if (!catalog.HasSdkSurfaces && !catalog.RawJsonEnabled)
             {
@@ -55,7 +61,6 @@ namespace Temperance
             }
 
             var options = context.Options.AnalyzerConfigOptionsProvider;
-            var tests = TestFrameworks.Resolve(context.Compilation, options.GlobalOptions);
             var states = new ConcurrentDictionary<SyntaxTree, TreeState>();
             var generated = new GeneratedCode(context.Compilation, options);
 
@@ -123,6 +128,9 @@ namespace Temperance
 
             return symbol;
         }
+
+        internal static void Judge(IReadOnlyList<ExtractedRequest> requests, TemperancePolicy policy, System.Action<Diagnostic> report) =>
+            Judge(requests, new TreeState(policy), report);
 
         private static void Judge(IReadOnlyList<ExtractedRequest> requests, TreeState state, System.Action<Diagnostic> report)
         {

@@ -167,10 +167,13 @@ namespace Temperance.Extraction
             end - start >= 3 && NameWords.TryGetValue(name.Substring(start, end - start).ToLowerInvariant(), out var kind) ? kind : null;
 
         /// <summary>Constant text among the block's operations: literals, const and static readonly string fields, interpolation text.</summary>
-        public static IEnumerable<TaskSignal> FromPrompts(IEnumerable<IOperation> operations)
+        public static IEnumerable<TaskSignal> FromPrompts(IEnumerable<IOperation> operations) => FromTexts(ConstantTexts(operations));
+
+        /// <summary>Task phrases in prompt texts (a template, an agent's instructions, a prompt file's body), one signal per kind.</summary>
+        public static IEnumerable<TaskSignal> FromTexts(IEnumerable<string> texts)
         {
             var seen = new HashSet<string>(StringComparer.Ordinal);
-            foreach (var text in ConstantTexts(operations))
+            foreach (var text in texts)
             {
                 var lower = text.ToLowerInvariant();
                 foreach (var (phrase, kind) in PromptPhrases)

@@ -50,6 +50,9 @@ namespace Temperance.Extraction
                 || name.EndsWith(".Specs", System.StringComparison.Ordinal));
         }
 
+        /// <summary>True in a test project: settings files there are test data, never sent by the product.</summary>
+        public bool InTestProject => testProject;
+
         public static TestFrameworks Resolve(Compilation compilation, Microsoft.CodeAnalysis.Diagnostics.AnalyzerConfigOptions? global = null)
         {
             var found = new HashSet<INamedTypeSymbol>(SymbolEqualityComparer.Default);

@@ -9,8 +9,9 @@ namespace Temperance.Model
     internal sealed class SettingWrite
     {
         public SettingWrite(Setting setting, ValueKind kind, double value, string member, Location location,
-            SyntaxNode? valueSyntax, NumericKind literalKind, bool fromConditional, string? origin, bool fromKey = false)
+            SyntaxNode? valueSyntax, NumericKind literalKind, bool fromConditional, string? origin, bool fromKey = false, FileSpans? inFile = null)
         {
+            InFile = inFile;
             FromKey = fromKey;
             Setting = setting;
             Kind = kind;
@@ -40,6 +41,21 @@ namespace Temperance.Model
         public bool FromKey { get; }
         /// <summary>Where a known value came from when it is not a literal here ("constant 'Hot'").</summary>
         public string? Origin { get; }
+        /// <summary>For a value written in a settings file: the spans a fix rewrites or deletes there (no syntax node exists).</summary>
+        public FileSpans? InFile { get; }
+    }
+
+    /// <summary>Where a value sits in a settings file: the value's text, and what deleting its entry removes (empty: no removal).</summary>
+    internal sealed class FileSpans
+    {
+        public FileSpans(Microsoft.CodeAnalysis.Text.TextSpan value, Microsoft.CodeAnalysis.Text.TextSpan removal)
+        {
+            Value = value;
+            Removal = removal;
+        }
+
+        public Microsoft.CodeAnalysis.Text.TextSpan Value { get; }
+        public Microsoft.CodeAnalysis.Text.TextSpan Removal { get; }
     }
 
     /// <summary>The numeric C# type of a member, so fixes write a literal that compiles.</summary>

@@ -40,7 +40,7 @@ public sealed class TemperanceTest : CSharpCodeFixTest<TemperanceAnalyzer, Tempe
 /// <summary>Short entry points, in the style of the Microsoft.CodeAnalysis.Testing verifiers.</summary>
 public static class Verify
 {
-    public static DiagnosticResult Diagnostic(string id) => new DiagnosticResult(id, Temperance.Rules.Descriptors.All.Single(d => d.Id == id).DefaultSeverity);
+    public static DiagnosticResult Diagnostic(string id) => new DiagnosticResult(id, Temperance.Rules.Descriptors.All.First(d => d.Id == id).DefaultSeverity);
 
     public static Task AnalyzerAsync(string source, params DiagnosticResult[] expected) => AnalyzerAsync(source, null, expected);
 
@@ -70,6 +70,51 @@ public static class Verify
 
         test.ExpectedDiagnostics.AddRange(expected);
         return test.RunAsync();
+    }
+
+    /// <summary>
+    /// Settings files passed as additional files (markup such as <c>{|SAMP004:…|}</c> marks the expected span in them), beside
+    /// C# sources; <paramref name="editorConfig"/> is a whole .editorconfig (sections by path).
+    /// </summary>
+    public static Task FilesAsync((string Path, string Content)[] files, string? editorConfig, params DiagnosticResult[] expected) =>
+        FilesAsync(files, new[] { "class Placeholder { }" }, editorConfig, expected);
+
+    public static Task FilesAsync((string Path, string Content)[] files, string[] sources, string? editorConfig, params DiagnosticResult[] expected)
+    {
+        var test = Files(files, sources, editorConfig);
+        test.ExpectedDiagnostics.AddRange(expected);
+        return test.RunAsync();
+    }
+
+    /// <summary>A fix in a settings file: the file before and after.</summary>
+    public static Task FileFixAsync(string path, string content, string fixedContent, int? codeActionIndex = null)
+    {
+        var test = Files(new[] { (path, content) }, new[] { "class Placeholder { }" }, null);
+        test.FixedState.Sources.Add("class Placeholder { }");
+        test.FixedState.AdditionalFiles.Add((path, fixedContent));
+        test.CodeActionIndex = codeActionIndex;
+        return test.RunAsync();
+    }
+
+    private static TemperanceTest Files((string Path, string Content)[] files, string[] sources, string? editorConfig)
+    {
+        var test = new TemperanceTest(sources[0]);
+        foreach (var more in sources.Skip(1))
+        {
+            test.TestState.Sources.Add(more);
+        }
+
+        foreach (var file in files)
+        {
+            test.TestState.AdditionalFiles.Add(file);
+        }
+
+        if (editorConfig != null)
+        {
+            test.TestState.AnalyzerConfigFiles.Add(("/.editorconfig", editorConfig));
+        }
+
+        return test;
     }
 
     public static Task FixAsync(string source, string fixedSource, string? editorConfig = null)

@@ -1,0 +1,240 @@
+using System;
+using System.Collections.Generic;
+using System.Globalization;
+using System.IO;
+using Microsoft.CodeAnalysis.Text;
+using Newtonsoft.Json;
+
+namespace Temperance.Files
+{
+    /// <summary>
+    /// Reads a JSON settings file into a <see cref="FileNode"/> tree with Json.NET, which takes comments and trailing
+    /// commas as appsettings.json is written. Json.NET gives the position at the end of each token; the start is found by
+    /// stepping back over the token's own characters.
+    /// </summary>
+    internal static class JsonFileReader
+    {
+        public static FileNode? Read(SourceText text, out FileParseError? error)
+        {
+            error = null;
+            try
+            {
+                using var reader = new JsonTextReader(new StringReader(text.ToString())) { DateParseHandling = DateParseHandling.None, FloatParseHandling = FloatParseHandling.Double };
+                if (!ReadSkippingComments(reader))
+                {
+                    return null; // empty file
+                }
+
+                var root = ReadValue(reader, text);
+                if (ReadSkippingComments(reader))
+                {
+                    throw new JsonReaderException($"Additional text after the end of the JSON value. Path '', line {reader.LineNumber}, position {reader.LinePosition}.");
+                }
+
+                return root;
+            }
+            catch (JsonException e)
+            {
+                var info = e as JsonReaderException;
+                error = new FileParseError(FirstSentence(e.Message), info?.LineNumber ?? 0, info?.LinePosition ?? 0);
+                return null;
+            }
+        }
+
+        private static FileNode ReadValue(JsonTextReader reader, SourceText text)
+        {
+            switch (reader.TokenType)
+            {
+                case JsonToken.StartObject:
+                {
+                    var start = End(reader, text) - 1;
+                    var entries = new List<FileEntry>();
+                    while (Next(reader) != JsonToken.EndObject)
+                    {
+                        var name = (string)reader.Value!;
+                        var keySpan = KeySpan(text, ColonOffset(reader, text));
+                        Next(reader);
+                        var value = ReadValue(reader, text);
+                        entries.Add(new FileEntry(name, keySpan, value, Removal(text, keySpan.Start, value.Span.End)));
+                    }
+
+                    return FileNode.Mapping(TextSpan.FromBounds(start, End(reader, text)), entries);
+                }
+
+                case JsonToken.StartArray:
+                {
+                    var start = End(reader, text) - 1;
+                    var items = new List<FileNode>();
+                    while (Next(reader) != JsonToken.EndArray)
+                    {
+                        items.Add(ReadValue(reader, text));
+                    }
+
+                    return FileNode.Sequence(TextSpan.FromBounds(start, End(reader, text)), items);
+                }
+
+                case JsonToken.String:
+                {
+                    var end = End(reader, text);
+                    return FileNode.Scalar(TextSpan.FromBounds(StringStart(text, end - 1), end), (string?)reader.Value, quoted: true);
+                }
+
+                default:
+                {
+                    // Numbers, true, false, null: the raw text is the value (1.0 stays "1.0", as a fix must see it).
+                    var end = End(reader, text);
+                    var start = end;
+                    while (start > 0 && IsBareTokenChar(text[start - 1]))
+                    {
+                        start--;
+                    }
+
+                    var raw = text.ToString(TextSpan.FromBounds(start, end));
+                    return FileNode.Scalar(TextSpan.FromBounds(start, end), reader.TokenType == JsonToken.Null ? null : raw, quoted: false);
+                }
+            }
+        }
+
+        private static JsonToken Next(JsonTextReader reader)
+        {
+            if (!ReadSkippingComments(reader))
+            {
+                throw new JsonReaderException($"Unexpected end of the file. Path '{reader.Path}', line {reader.LineNumber}, position {reader.LinePosition}.");
+            }
+
+            return reader.TokenType;
+        }
+
+        private static bool ReadSkippingComments(JsonTextReader reader)
+        {
+            while (reader.Read())
+            {
+                if (reader.TokenType != JsonToken.Comment)
+                {
+                    return true;
+                }
+            }
+
+            return false;
+        }
+
+        /// <summary>The offset just after the token the reader is on (Json.NET's line position counts from 1 to the token's last character).</summary>
+        private static int End(JsonTextReader reader, SourceText text)
+        {
+            var line = text.Lines[Math.Max(0, Math.Min(reader.LineNumber - 1, text.Lines.Count - 1))];
+            return Math.Min(line.Start + reader.LinePosition, line.EndIncludingLineBreak);
+        }
+
+        /// <summary>For a property name, Json.NET stops on the colon that follows it.</summary>
+        private static int ColonOffset(JsonTextReader reader, SourceText text) => Math.Max(0, End(reader, text) - 1);
+
+        private static TextSpan KeySpan(SourceText text, int colon)
+        {
+            var end = colon;
+            while (end > 0 && char.IsWhiteSpace(text[end - 1]))
+            {
+                end--;
+            }
+
+            if (end > 0 && text[end - 1] is '"' or '\'')
+            {
+                return TextSpan.FromBounds(StringStart(text, end - 1), end);
+            }
+
+            var start = end;
+            while (start > 0 && IsBareTokenChar(text[start - 1]))
+            {
+                start--;
+            }
+
+            return TextSpan.FromBounds(start, end);
+        }
+
+        /// <summary>The opening quote of the string whose closing quote is at <paramref name="close"/> (escaped quotes skipped).</summary>
+        private static int StringStart(SourceText text, int close)
+        {
+            var quote = text[close];
+            for (var i = close - 1; i >= 0; i--)
+            {
+                if (text[i] != quote)
+                {
+                    continue;
+                }
+
+                var backslashes = 0;
+                for (var j = i - 1; j >= 0 && text[j] == '\\'; j--)
+                {
+                    backslashes++;
+                }
+
+                if (backslashes % 2 == 0)
+                {
+                    return i;
+                }
+            }
+
+            return close;
+        }
+
+        private static bool IsBareTokenChar(char c) => char.IsLetterOrDigit(c) || c is '.' or '-' or '+' or '_' or '$';
+
+        /// <summary>
+        /// What deleting an entry removes: the entry and its comma (the following one, or the preceding one for the last
+        /// entry), and the whole line when the entry had it to itself.
+        /// </summary>
+        private static TextSpan Removal(SourceText text, int start, int end)
+        {
+            var after = end;
+            while (after < text.Length && text[after] is ' ' or '\t')
+            {
+                after++;
+            }
+
+            if (after < text.Length && text[after] == ',')
+            {
+                end = after + 1;
+            }
+            else
+            {
+                var before = start;
+                while (before > 0 && char.IsWhiteSpace(text[before - 1]))
+                {
+                    before--;
+                }
+
+                if (before > 0 && text[before - 1] == ',')
+                {
+                    return TextSpan.FromBounds(before - 1, end);
+                }
+            }
+
+            var line = text.Lines.GetLineFromPosition(start);
+            var lastLine = text.Lines.GetLineFromPosition(end);
+            if (IsBlank(text, line.Start, start) && IsBlank(text, end, lastLine.End))
+            {
+                return TextSpan.FromBounds(line.Start, lastLine.EndIncludingLineBreak);
+            }
+
+            return TextSpan.FromBounds(start, end);
+        }
+
+        internal static bool IsBlank(SourceText text, int start, int end)
+        {
+            for (var i = start; i < end; i++)
+            {
+                if (!char.IsWhiteSpace(text[i]))
+                {
+                    return false;
+                }
+            }
+
+            return true;
+        }
+
+        private static string FirstSentence(string message)
+        {
+            var path = message.IndexOf(" Path '", StringComparison.Ordinal);
+            return (path > 0 ? message.Substring(0, path) : message).Trim();
+        }
+    }
+}

@@ -1,0 +1,131 @@
+using System;
+using System.IO;
+using System.Linq;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Diagnostics;
+using Microsoft.CodeAnalysis.Text;
+using Temperance.Policy;
+using Temperance.Rules;
+using Temperance.Surfaces;
+
+namespace Temperance.Files
+{
+    /// <summary>
+    /// One additional file: decide what kind of settings file it is (by name first, then by its keys), read its requests and
+    /// judge them with the same rules and the policy of the file's own path. A file that cannot be parsed but mentions a
+    /// sampling key gets one SAMP100 naming the file and the parser's message, never a silent skip.
+    /// </summary>
+    internal static class SettingsFileAnalysis
+    {
+        public static void Analyze(AdditionalFileAnalysisContext context, bool inTestProject)
+        {
+            var path = context.AdditionalFile.Path;
+            var kind = KindOf(path);
+            if (kind == FileKind.None)
+            {
+                return;
+            }
+
+            var text = context.AdditionalFile.GetText(context.CancellationToken);
+            if (text == null)
+            {
+                return;
+            }
+
+            var content = text.ToString();
+            if (!FileSurfaces.MayHoldSettings(content))
+            {
+                return; // nearly free for the many files without a sampling key
+            }
+
+            if (kind == FileKind.AppSettings)
+            {
+                // Configuration is judged where C# copies it into a request; here only that the file can be read at all.
+                JsonFileReader.Read(text, out var configError);
+                ReportUnreadable(context, text, configError);
+                return;
+            }
+
+            var surface = kind switch
+            {
+                FileKind.PromptDirectory => FileSurfaces.PromptDirectory,
+                FileKind.FrontMatter => FileSurfaces.FrontMatterPrompt,
+                _ => null, // YAML: a template or an agent definition, told apart by its keys
+            };
+            var sibling = surface?.SiblingPrompt is { } siblingName ? Sibling(context, path, siblingName) : null;
+            var requests = FileRequestReader.Read(path, text, surface, sibling, inTestProject, out var error);
+            if (ReportUnreadable(context, text, error) || requests.Count == 0)
+            {
+                return;
+            }
+
+            var policy = new TemperancePolicy(context.Options.AnalyzerConfigOptionsProvider.GetOptions(context.AdditionalFile),
+                context.Options.AnalyzerConfigOptionsProvider.GlobalOptions);
+            TemperanceAnalyzer.Judge(requests, policy, context.ReportDiagnostic);
+        }
+
+        private enum FileKind
+        {
+            None,
+            PromptDirectory,
+            Yaml,
+            FrontMatter,
+            AppSettings,
+        }
+
+        private static FileKind KindOf(string path)
+        {
+            var name = Path.GetFileName(path);
+            if (name.Equals("config.json", StringComparison.OrdinalIgnoreCase))
+            {
+                return FileKind.PromptDirectory;
+            }
+
+            if (name.StartsWith("appsettings", StringComparison.OrdinalIgnoreCase) && name.EndsWith(".json", StringComparison.OrdinalIgnoreCase))
+            {
+                return FileKind.AppSettings;
+            }
+
+            if (name.EndsWith(".yaml", StringComparison.OrdinalIgnoreCase) || name.EndsWith(".yml", StringComparison.OrdinalIgnoreCase))
+            {
+                return FileKind.Yaml;
+            }
+
+            return FrontMatterExtensions.Any(e => name.EndsWith(e, StringComparison.OrdinalIgnoreCase)) ? FileKind.FrontMatter : FileKind.None;
+        }
+
+        /// <summary>Prompt files with a front matter of model parameters: Prompty, the .prompt format and Markdown prompt files.</summary>
+        internal static readonly string[] FrontMatterExtensions = { ".prompty", ".prompt", ".prompt.md" };
+
+        private static string? Sibling(AdditionalFileAnalysisContext context, string path, string name)
+        {
+            var directory = Path.GetDirectoryName(path);
+            foreach (var other in context.Options.AdditionalFiles)
+            {
+                if (Path.GetFileName(other.Path).Equals(name, StringComparison.OrdinalIgnoreCase)
+                    && string.Equals(Path.GetDirectoryName(other.Path), directory, StringComparison.Ordinal))
+                {
+                    return other.GetText(context.CancellationToken)?.ToString();
+                }
+            }
+
+            return null;
+        }
+
+        private static bool ReportUnreadable(AdditionalFileAnalysisContext context, SourceText text, FileParseError? error)
+        {
+            if (error == null)
+            {
+                return false;
+            }
+
+            var line = Math.Max(0, Math.Min(error.Line - 1, text.Lines.Count - 1));
+            var position = new LinePosition(line, Math.Max(0, Math.Min(error.Column - 1, text.Lines[line].Span.Length)));
+            var start = text.Lines.GetPosition(position);
+            var span = new TextSpan(start, 0);
+            var location = Location.Create(context.AdditionalFile.Path, span, new LinePositionSpan(position, position));
+            context.ReportDiagnostic(Diagnostic.Create(Descriptors.UnreadableSettingsFile, location, Path.GetFileName(context.AdditionalFile.Path), error.Message, error.Line, error.Column));
+            return true;
+        }
+    }
+}
