@@ -22,7 +22,8 @@ namespace Temperance.CodeFixes
     /// encodes and decodes them); this provider applies four generic edits (<see cref="FixEditKind"/>), and wraps the
     /// statement in a pragma when an edit uses an experimental member, so a new rule with a known edit needs no new fixer.
     /// </summary>
-    [ExportCodeFixProvider(LanguageNames.CSharp, Name = nameof(TemperanceCodeFixProvider)), Shared]
+    [ExportCodeFixProvider(LanguageNames.CSharp, Name = nameof(TemperanceCodeFixProvider),
+        DocumentKinds = new[] { nameof(TextDocumentKind.Document), nameof(TextDocumentKind.AdditionalDocument) }), Shared]
     public sealed class TemperanceCodeFixProvider : CodeFixProvider
     {
         /// <summary>Derived from the rule catalog: every rule whose findings carry an edit.</summary>
@@ -32,6 +33,11 @@ namespace Temperance.CodeFixes
 
         public override Task RegisterCodeFixesAsync(CodeFixContext context)
         {
+            if (context.TextDocument is not Document)
+            {
+                return SettingsFileFixes.RegisterAsync(context);
+            }
+
             foreach (var diagnostic in context.Diagnostics)
             {
                 if (!FixProperties.TryDecode(diagnostic.Properties, out var fix))

@@ -121,7 +121,7 @@ namespace Temperance.Files
 
                     var known = entry.Value.Kind == FileNodeKind.Scalar && double.TryParse(entry.Value.Text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value);
                     writes.Add(new SettingWrite(setting, known ? ValueKind.Known : ValueKind.Unknown, known ? double.Parse(entry.Value.Text!, NumberStyles.Float, CultureInfo.InvariantCulture) : 0,
-                        entry.Key, file.Location(entry.Span), null, NumericKind.Double, fromConditional: false,
+                        entry.Key, file.Location(entry.Span), null, setting is Setting.Seed or Setting.TopK or Setting.Candidates ? NumericKind.Int : NumericKind.Double, fromConditional: false,
                         origin: known ? null : $"'{entry.Value.Text ?? "…"}', computed when the file is loaded", fromKey: true,
                         inFile: new FileSpans(entry.Value.Span, entry.Removal)));
                 }

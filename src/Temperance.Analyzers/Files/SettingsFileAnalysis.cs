@@ -112,6 +112,13 @@ namespace Temperance.Files
             return null;
         }
 
+        /// <summary>The file as messages name it: its folder and name (<c>Poem/config.json</c>), enough to find it in a project.</summary>
+        private static string ShortName(string path)
+        {
+            var folder = Path.GetFileName(Path.GetDirectoryName(path) ?? string.Empty);
+            return string.IsNullOrEmpty(folder) ? Path.GetFileName(path) : folder + "/" + Path.GetFileName(path);
+        }
+
         private static bool ReportUnreadable(AdditionalFileAnalysisContext context, SourceText text, FileParseError? error)
         {
             if (error == null)
@@ -124,7 +131,10 @@ namespace Temperance.Files
             var start = text.Lines.GetPosition(position);
             var span = new TextSpan(start, 0);
             var location = Location.Create(context.AdditionalFile.Path, span, new LinePositionSpan(position, position));
-            context.ReportDiagnostic(Diagnostic.Create(Descriptors.UnreadableSettingsFile, location, Path.GetFileName(context.AdditionalFile.Path), error.Message, error.Line, error.Column));
+            // SAMP100 with the file in place of a key: the file's content is the value that could not be used.
+            var syntax = FileRequestReader.SyntaxOf(context.AdditionalFile.Path) == SettingsFileSyntax.Json ? "JSON" : "YAML";
+            context.ReportDiagnostic(Diagnostic.Create(Descriptors.InvalidConfiguration, location, ShortName(context.AdditionalFile.Path), error.Message,
+                $"{syntax} that parses (the parser stopped at line {error.Line}, column {error.Column}); its sampling settings are not checked"));
             return true;
         }
     }

@@ -91,16 +91,6 @@ namespace Temperance.Rules
             Compatibility, DiagnosticSeverity.Warning,
             "Some publishers advise against moving a setting away from a value for a model: below it the model may loop or degrade. The request is accepted, so nothing fails; the output just gets worse.");
 
-        /// <summary>
-        /// SAMP100 for a settings file that mentions sampling keys but cannot be parsed: its requests cannot be judged, and
-        /// saying so beats a silent skip.
-        /// </summary>
-        public static readonly DiagnosticDescriptor UnreadableSettingsFile = Create(
-            "SAMP100", "Invalid Temperance configuration",
-            "Settings file '{0}' could not be read: {1} (line {2}, column {3}). Its sampling settings are not checked until it parses.",
-            Configuration, DiagnosticSeverity.Warning,
-            "A prompt directory, prompt template, agent definition, prompt file or appsettings file that holds sampling settings could not be parsed. Temperance never guesses what it says.");
-
         public static readonly DiagnosticDescriptor InvalidConfiguration = Create(
             "SAMP100", "Invalid Temperance configuration",
             "Temperance configuration '{0}' has the value '{1}'; expected {2}. The rule that needs it is skipped until this is fixed.",
@@ -122,7 +112,7 @@ namespace Temperance.Rules
         private static class Derived
         {
             public static readonly ImmutableArray<DiagnosticDescriptor> All =
-                RuleCatalog.All.Select(r => r.Descriptor).OrderBy(d => d.Id, System.StringComparer.Ordinal).Concat(new[] { InvalidConfiguration, UnreadableSettingsFile }).ToImmutableArray();
+                RuleCatalog.All.Select(r => r.Descriptor).OrderBy(d => d.Id, System.StringComparer.Ordinal).Concat(new[] { InvalidConfiguration }).ToImmutableArray();
 
             public static readonly ImmutableHashSet<string> NoKnownFalsePositives =
                 RuleCatalog.All.Where(r => r.NoKnownFalsePositives).Select(r => r.Descriptor.Id).Concat(new[] { InvalidConfiguration.Id }).ToImmutableHashSet();

@@ -17,9 +17,10 @@ namespace Temperance.Rules
 
         public FixPlan SetValue(SettingWrite write, double value)
         {
-            if (write.ValueSyntax != null)
+            // In code the value expression is replaced; in a settings file, the value's text.
+            if (write.ValueSyntax != null || write.InFile != null)
             {
-                edits.Add(FixEdit.SetValue(write.ValueSyntax.Span, write.Member, value, write.LiteralKind));
+                edits.Add(FixEdit.SetValue(write.ValueSyntax?.Span ?? write.InFile!.Value, write.Member, value, write.LiteralKind));
             }
 
             return this;
@@ -27,7 +28,12 @@ namespace Temperance.Rules
 
         public FixPlan Remove(SettingWrite write)
         {
-            edits.Add(FixEdit.RemoveMember(write.Location.SourceSpan, write.Member, write.LiteralKind));
+            // A settings-file entry is removed only where the reader found a span that leaves the file valid.
+            if (write.InFile == null || !write.InFile.Removal.IsEmpty)
+            {
+                edits.Add(FixEdit.RemoveMember(write.InFile?.Removal ?? write.Location.SourceSpan, write.Member, write.LiteralKind));
+            }
+
             return this;
         }
 

@@ -85,7 +85,7 @@ public class PromptDirectoryTests
         const string config = "{\n  \"execution_settings\": {\n    \"default\": { \"temperature\": 0.9 \"top_p\": 0.5 }\n  }\n}\n";
         await Verify.FilesAsync(new[] { ("/Prompts/Poem/config.json", config), ("/Prompts/Poem/skprompt.txt", PoemPrompt) }, null,
             Verify.Diagnostic("SAMP100").WithSpan("/Prompts/Poem/config.json", 3, 36, 3, 36)
-                .WithMessage("Settings file 'config.json' could not be read: After parsing a value an unexpected character was encountered: \". (line 3, column 36). Its sampling settings are not checked until it parses."));
+                .WithMessage("Temperance configuration 'Poem/config.json' has the value 'After parsing a value an unexpected character was encountered: \".'; expected JSON that parses (the parser stopped at line 3, column 36); its sampling settings are not checked. The rule that needs it is skipped until this is fixed."));
     }
 
     [Fact]

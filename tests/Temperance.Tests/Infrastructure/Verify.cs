@@ -40,7 +40,7 @@ public sealed class TemperanceTest : CSharpCodeFixTest<TemperanceAnalyzer, Tempe
 /// <summary>Short entry points, in the style of the Microsoft.CodeAnalysis.Testing verifiers.</summary>
 public static class Verify
 {
-    public static DiagnosticResult Diagnostic(string id) => new DiagnosticResult(id, Temperance.Rules.Descriptors.All.First(d => d.Id == id).DefaultSeverity);
+    public static DiagnosticResult Diagnostic(string id) => new DiagnosticResult(id, Temperance.Rules.Descriptors.All.Single(d => d.Id == id).DefaultSeverity);
 
     public static Task AnalyzerAsync(string source, params DiagnosticResult[] expected) => AnalyzerAsync(source, null, expected);
 
@@ -83,16 +83,6 @@ public static class Verify
     {
         var test = Files(files, sources, editorConfig);
         test.ExpectedDiagnostics.AddRange(expected);
-        return test.RunAsync();
-    }
-
-    /// <summary>A fix in a settings file: the file before and after.</summary>
-    public static Task FileFixAsync(string path, string content, string fixedContent, int? codeActionIndex = null)
-    {
-        var test = Files(new[] { (path, content) }, new[] { "class Placeholder { }" }, null);
-        test.FixedState.Sources.Add("class Placeholder { }");
-        test.FixedState.AdditionalFiles.Add((path, fixedContent));
-        test.CodeActionIndex = codeActionIndex;
         return test.RunAsync();
     }
 
