@@ -60,6 +60,8 @@ public class PackageEndToEndTests : IClassFixture<PackageFixture>
         var entries = package.PackageEntries();
         Assert.Contains("analyzers/dotnet/cs/Temperance.Analyzers.dll", entries);
         Assert.Contains("analyzers/dotnet/cs/Temperance.CodeFixes.dll", entries);
+        Assert.Contains("analyzers/dotnet/cs/YamlDotNet.dll", entries);
+        Assert.Contains("analyzers/dotnet/cs/Newtonsoft.Json.dll", entries);
         Assert.Contains("buildTransitive/Temperance.Analyzers.props", entries);
         Assert.Contains("buildTransitive/temperance.globalconfig", entries);
         Assert.DoesNotContain(entries, e => e.StartsWith("lib/", StringComparison.Ordinal));
@@ -327,9 +329,12 @@ public class PackageEndToEndTests : IClassFixture<PackageFixture>
             extraPackages: """<PackageReference Include="Microsoft.Net.Compilers.Toolset" Version="4.14.0" PrivateAssets="all" />""",
             extraProperties: "<LangVersion>12</LangVersion>");
         consumer.Write("Presets.cs", Presets);
+        // A settings file too: the parsers packed beside the analyzer load in this compiler as well.
+        consumer.Write("agent.yaml", "model:\n  id: gpt-4.1-mini\n  options:\n    temperature: 0.6\n    topP: 0.8\n");
         var build = consumer.Build();
         Assert.True(build.ExitCode == 0, build.ToString());
         Assert.Matches("warning SAMP005", build.Output);
+        Assert.Matches(@"agent\.yaml\(5,5(,5,14)?\): warning SAMP004", build.Output);
         Assert.DoesNotMatch("CS8032|CS9057|AD0001", build.Output);
     }
 }
