@@ -17,7 +17,7 @@ namespace Temperance.Files
     /// </summary>
     internal static class SettingsFileAnalysis
     {
-        public static void Analyze(AdditionalFileAnalysisContext context, bool inTestProject)
+        public static void Analyze(AdditionalFileAnalysisContext context, bool inTestProject, PromptSiblings siblings)
         {
             var path = context.AdditionalFile.Path;
             var kind = KindOf(path);
@@ -52,7 +52,7 @@ namespace Temperance.Files
                 FileKind.FrontMatter => FileSurfaces.FrontMatterPrompt,
                 _ => null, // YAML: a template or an agent definition, told apart by its keys
             };
-            var sibling = surface?.SiblingPrompt is { } siblingName ? Sibling(context, path, siblingName) : null;
+            var sibling = surface?.SiblingPrompt is { } siblingName ? siblings.Find(path, siblingName, context.CancellationToken) : null;
             var requests = FileRequestReader.Read(path, text, surface, sibling, inTestProject, out var error);
             if (ReportUnreadable(context, text, error) || requests.Count == 0)
             {
@@ -97,21 +97,6 @@ namespace Temperance.Files
         /// <summary>Prompt files with a front matter of model parameters: Prompty, the .prompt format and Markdown prompt files.</summary>
         internal static readonly string[] FrontMatterExtensions = { ".prompty", ".prompt", ".prompt.md" };
 
-        private static string? Sibling(AdditionalFileAnalysisContext context, string path, string name)
-        {
-            var directory = Path.GetDirectoryName(path);
-            foreach (var other in context.Options.AdditionalFiles)
-            {
-                if (Path.GetFileName(other.Path).Equals(name, StringComparison.OrdinalIgnoreCase)
-                    && string.Equals(Path.GetDirectoryName(other.Path), directory, StringComparison.Ordinal))
-                {
-                    return other.GetText(context.CancellationToken)?.ToString();
-                }
-            }
-
-            return null;
-        }
-
         /// <summary>The file as messages name it: its folder and name (<c>Poem/config.json</c>), enough to find it in a project.</summary>
         private static string ShortName(string path)
         {
@@ -137,5 +122,39 @@ namespace Temperance.Files
                 $"{syntax} that parses (the parser stopped at line {error.Line}, column {error.Column}); its sampling settings are not checked"));
             return true;
         }
+    }
+
+    /// <summary>
+    /// The prompt files that sit beside settings files (skprompt.txt), by folder: indexed once per compilation, so a project
+    /// with hundreds of prompt directories does not scan every additional file for every config.json.
+    /// </summary>
+    internal sealed class PromptSiblings
+    {
+        private readonly System.Collections.Immutable.ImmutableArray<AdditionalText> files;
+        private System.Collections.Generic.Dictionary<string, AdditionalText>? byFolderAndName;
+
+        public PromptSiblings(System.Collections.Immutable.ImmutableArray<AdditionalText> files)
+        {
+            this.files = files;
+        }
+
+        public string? Find(string path, string name, System.Threading.CancellationToken cancellationToken)
+        {
+            var index = System.Threading.LazyInitializer.EnsureInitialized(ref byFolderAndName, Index)!;
+            return index.TryGetValue(Key(Path.GetDirectoryName(path), name), out var sibling) ? sibling.GetText(cancellationToken)?.ToString() : null;
+        }
+
+        private System.Collections.Generic.Dictionary<string, AdditionalText> Index()
+        {
+            var index = new System.Collections.Generic.Dictionary<string, AdditionalText>(StringComparer.Ordinal);
+            foreach (var file in files)
+            {
+                index[Key(Path.GetDirectoryName(file.Path), Path.GetFileName(file.Path))] = file;
+            }
+
+            return index;
+        }
+
+        private static string Key(string? folder, string name) => (folder ?? string.Empty) + "|" + name.ToLowerInvariant();
     }
 }
