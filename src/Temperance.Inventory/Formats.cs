@@ -214,7 +214,7 @@ public static class Formats
         {
             var task = r.Task == null ? "-" : $"{r.Task} ({r.TaskEvidence})";
             var findings = Findings(r, f => $"{f.Id} {f.Message}", "<br>");
-            text.Append($"| `{Where(r, root)}` | {Escape(r.Sdk)} | {Escape(r.ModelLine ?? "-")} | {Escape(task)} | {Escape(Value(r.Setting("temperature")))} | {Escape(Value(r.Setting("top_p")))} | {Escape(Value(r.Setting("seed")))} | {Escape(findings)} |")
+            text.Append($"| `{Where(r, root)}` | {Escape(r.Sdk + (r.LayerLine == null ? string.Empty : $" (settings from {r.LayerLine})"))} | {Escape(r.ModelLine ?? "-")} | {Escape(task)} | {Escape(Value(r.Setting("temperature")))} | {Escape(Value(r.Setting("top_p")))} | {Escape(Value(r.Setting("seed")))} | {Escape(findings)} |")
                 .AppendLine(several ? $" {Escape(r.Project)} |" : string.Empty);
         }
 
@@ -261,6 +261,7 @@ public static class Formats
                 model = r.Model,
                 model_family = r.Family,
                 model_source = r.ModelSource,
+                layers = r.Layers,
                 task = r.Task == null ? null : new { kind = r.Task, evidence = r.TaskEvidence, ceiling = r.Ceiling, ceiling_key = r.CeilingKey },
                 settings = r.Settings.ToDictionary(s => s.Name, s => new { value = s.Value, source = s.Source, state = s.State }),
                 findings = r.Findings.Select(f => new

@@ -492,7 +492,7 @@ public static class HtmlReport
             .Append($" data-sort-seed=\"{(row.Setting("seed")?.Value is { } s ? N(s) : string.Empty)}\" data-sort-severity=\"{(row.NotJudged != null ? 0 : Report.Rank(Report.Worst(row)))}\">");
         page.Append($"<td data-label=\"Where\"><div class=\"v\"><a class=\"src\" href=\"{H(SourceHref(report, row.File))}\"><code>{Soft(where, dots: false)}</code></a></div></td>");
         page.Append($"<td data-label=\"Project\"><div class=\"v\">{Soft(row.Project)}</div></td>");
-        page.Append($"<td data-label=\"SDK\"><div class=\"v\">{Soft(row.Library)}<small>{Soft(row.Sdk)}</small></div></td>");
+        page.Append($"<td data-label=\"SDK\"><div class=\"v\">{Soft(row.Library)}<small>{Soft(row.Sdk)}</small>{(row.LayerLine == null ? string.Empty : $"<small class=\"evidence\">settings from {H(row.LayerLine)}</small>")}</div></td>");
         page.Append($"<td data-label=\"Model\"><div class=\"v\">{(row.Model == null ? "<span class=\"muted\">not constant</span>" : $"<code>{Soft(row.Model)}</code>{(row.Family == null ? string.Empty : $"<small>family {H(row.Family)}</small>")}{(row.ModelSource == null ? string.Empty : $"<small class=\"evidence\">{Prose(row.ModelSource)}</small>")}")}</div></td>");
         page.Append($"<td data-label=\"Task\"><div class=\"v\">{(row.Task == null ? "<span class=\"muted\">no task inferred</span>" : $"{H(row.Task)}<small class=\"evidence\">{Prose(row.TaskEvidence)}</small>")}</div></td>");
         page.Append($"<td data-label=\"Temperature\"><div class=\"v\">{Setting(row.Temperature)}</div></td>");

@@ -50,8 +50,9 @@ public static class Inventory
         }
 
         var analyzer = new TemperanceAnalyzer();
+        var settingsFiles = SettingsFiles.Of(project);
         var withAnalyzer = compilation.WithAnalyzers(ImmutableArray.Create<DiagnosticAnalyzer>(analyzer),
-            new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty, options));
+            new AnalyzerOptions(settingsFiles, options));
         var diagnostics = (await withAnalyzer.GetAnalyzerDiagnosticsAsync(cancellationToken).ConfigureAwait(false))
             .Where(d => d.Id.StartsWith("SAMP", StringComparison.Ordinal) && d.Severity != DiagnosticSeverity.Hidden)
             .ToList();
@@ -87,6 +88,13 @@ public static class Inventory
             }
         }
 
+        // Requests written in settings files (prompt directories, templates, agent definitions, prompt files), read by the
+        // analyzer's own file front end and judged with the file's own policy.
+        foreach (var (file, request) in SettingsFiles.Requests(settingsFiles, tests.InTestProject, cancellationToken))
+        {
+            rows.Add(Row(project, request, new TemperancePolicy(options.GetOptions(file), options.GlobalOptions), diagnostics, ModelOf, libraries));
+        }
+
         return new ProjectInventory(rows, null);
     }
 
@@ -110,6 +118,7 @@ public static class Inventory
                     new SettingRow(name, fallback.Value, "default of the provider", SettingState.Default),
                 ValueKind.Unset when !policy.UnsetMeansDefault(request.Provider) => new SettingRow(name, null, "unset (left to the client)", SettingState.Unset),
                 ValueKind.Unset => new SettingRow(name, null, "unset", SettingState.Unset),
+                _ when last?.InFile != null => new SettingRow(name, null, $"unknown ({last.Origin})", SettingState.Unknown),
                 _ => new SettingRow(name, null, $"unknown ({UnknownOrigin.Describe(request, setting, models)})", SettingState.Unknown),
             });
         }
@@ -126,7 +135,7 @@ public static class Inventory
         }
 
         var findings = diagnostics
-            .Where(d => d.Location.IsInSource && (places.Contains(Key(d.Location)) || Within(d.Location, request.Location)))
+            .Where(d => (d.Location.IsInSource || d.Location.Kind == LocationKind.ExternalFile) && (places.Contains(Key(d.Location)) || Within(d.Location, request.Location)))
             .Select(Finding)
             .Distinct()
             .ToList();
@@ -139,8 +148,8 @@ public static class Inventory
               + (family == null ? string.Empty : $"; family from {family.Key}");
         return new RequestRow(project.Name, span.Path, span.StartLinePosition.Line + 1, request.Surface, request.Provider,
             seen.ModelId, task?.Kind, task?.Because, settings, findings, request.SilentBecause,
-            libraries.TryGetValue(request.Surface, out var library) ? library : request.Provider, ceiling?.Value, ceiling?.Key,
-            family?.Name, modelSource);
+            SettingsFiles.IsFileRequest(request) ? "settings file" : libraries.TryGetValue(request.Surface, out var library) ? library : request.Provider, ceiling?.Value, ceiling?.Key,
+            family?.Name, modelSource, Layers(request));
     }
 
     private static FindingRow Finding(Diagnostic diagnostic)
@@ -184,10 +193,34 @@ public static class Inventory
         return parts.Length > 2 ? parts[0] + "." + parts[1] : parts[0];
     }
 
-    private static (string, int) Key(Location location) => (location.SourceTree?.FilePath ?? string.Empty, location.SourceSpan.Start);
+    private static (string, int) Key(Location location) => (location.SourceTree?.FilePath ?? location.GetLineSpan().Path, location.SourceSpan.Start);
 
     private static bool Within(Location inner, Location outer) =>
-        inner.SourceTree == outer.SourceTree && outer.SourceSpan.Contains(inner.SourceSpan);
+        inner.GetLineSpan().Path == outer.GetLineSpan().Path && outer.SourceSpan.Contains(inner.SourceSpan);
+
+    /// <summary>
+    /// Where a request's effective settings come from: a settings file, code, configuration (appsettings values copied into
+    /// it). More than one layer is where a value can be lost or overridden without anyone seeing it.
+    /// </summary>
+    private static IReadOnlyList<string> Layers(Request request)
+    {
+        var layers = new List<string>();
+        if (SettingsFiles.IsFileRequest(request))
+        {
+            layers.Add("file");
+        }
+        else if (request.Writes.Any(w => !SettingsFiles.FromConfiguration(w)))
+        {
+            layers.Add("code");
+        }
+
+        if (request.Writes.Any(SettingsFiles.FromConfiguration))
+        {
+            layers.Add("configuration");
+        }
+
+        return layers;
+    }
 
     /// <summary>The project's own configuration first, the shipped table under it (for projects without the package).</summary>
     private sealed class FallbackOptions : AnalyzerConfigOptionsProvider

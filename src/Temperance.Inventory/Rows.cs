@@ -31,12 +31,16 @@ public sealed record FindingRow(string Id, string Severity, string Message, stri
 /// <param name="Library">The SDK that type belongs to (<c>OpenAI</c>, <c>Microsoft.Extensions.AI</c>).</param>
 /// <param name="Ceiling">The task's temperature ceiling (SAMP001) from the rules table and the project's options, when the task has one.</param>
 /// <param name="CeilingKey">The option key the ceiling came from.</param>
+/// <param name="Layers">Where the settings come from: "file" (a prompt directory, template, agent definition), "code", "configuration".</param>
 public sealed record RequestRow(
     string Project, string File, int Line, string Sdk, string Provider, string? Model,
     string? Task, string? TaskEvidence, IReadOnlyList<SettingRow> Settings, IReadOnlyList<FindingRow> Findings,
     string? NotJudged = null, string Library = "", double? Ceiling = null, string? CeilingKey = null,
-    string? Family = null, string? ModelSource = null)
+    string? Family = null, string? ModelSource = null, IReadOnlyList<string>? Layers = null)
 {
+    /// <summary>Where the effective settings come from when more than one layer sets them ("code + configuration"), else null.</summary>
+    public string? LayerLine => Layers is { Count: > 1 } ? string.Join(" + ", Layers) : null;
+
     /// <summary>The model, its family from the rules table and where both came from, in one line ("o3-mini, family openai_reasoning (the client; temperance.deployment.x)").</summary>
     public string? ModelLine => Model == null ? null : Model + (Family == null ? string.Empty : $", family {Family}") + (ModelSource == null ? string.Empty : $" ({ModelSource})");
 

@@ -108,7 +108,7 @@ public partial class InventoryToolTests
             var findings = List("FindingRow",
                 Create("FindingRow", "SAMP001", "Warning", finding, "https://example.invalid/rules/SAMP001.md", "Temperature above the ceiling", file, line));
             return Create("RequestRow", "Harbour", file, line, "ChatCompletionOptions", "openai", null, "extraction", "the method name",
-                settings, findings, null, "OpenAI", 0.3, "temperance.task.extraction.max_temperature", null, null);
+                settings, findings, null, "OpenAI", 0.3, "temperance.task.extraction.max_temperature", null, null, null);
         }
 
         public string Table(object[] rows, string root)

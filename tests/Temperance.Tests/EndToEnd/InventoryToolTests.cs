@@ -127,6 +127,31 @@ public partial class InventoryToolTests : IClassFixture<InventoryFixture>
     }
 
     [Fact]
+    public void Json_ListsTheDemosSettingsFileRequests_WithTheirFileLineAndFindings()
+    {
+        var file = Path.Combine(tool.Output, "files.json");
+        var run = tool.Run($"\"{tool.Demo}\" --format json --output \"{file}\"");
+        Assert.True(run.ExitCode == 0, run.ToString());
+
+        using var json = JsonDocument.Parse(File.ReadAllText(file));
+        var requests = json.RootElement.GetProperty("requests").EnumerateArray().ToList();
+        var booking = requests.Single(r => r.GetProperty("file").GetString()!.Replace('\\', '/').EndsWith("Prompts/BookingLookup/config.json", StringComparison.Ordinal));
+        Assert.Equal(5, booking.GetProperty("line").GetInt32());
+        Assert.Equal("settings file", booking.GetProperty("library").GetString());
+        Assert.Equal("extraction", booking.GetProperty("task").GetProperty("kind").GetString());
+        Assert.Equal(0.9, booking.GetProperty("settings").GetProperty("temperature").GetProperty("value").GetDouble(), 3);
+        Assert.Equal(new[] { "SAMP001", "SAMP004" }, booking.GetProperty("findings").EnumerateArray().Select(f => f.GetProperty("id").GetString()).OrderBy(i => i));
+        Assert.Equal(new[] { "file" }, booking.GetProperty("layers").EnumerateArray().Select(l => l.GetString()));
+
+        var planner = requests.Single(r => r.GetProperty("file").GetString()!.EndsWith("deck-planner.yaml", StringComparison.Ordinal));
+        Assert.Equal(10, planner.GetProperty("line").GetInt32());
+        Assert.Equal("o4-mini", planner.GetProperty("model").GetString());
+        var rejected = Assert.Single(planner.GetProperty("findings").EnumerateArray());
+        Assert.Equal("SAMP007", rejected.GetProperty("id").GetString());
+        Assert.Equal(11, rejected.GetProperty("line").GetInt32());
+    }
+
+    [Fact]
     public void Json_NamesTheModel_ItsFamily_AndWhereBothCameFrom()
     {
         var file = Path.Combine(tool.Output, "models.json");
@@ -164,7 +189,7 @@ public partial class InventoryToolTests : IClassFixture<InventoryFixture>
 
         // The summary and the findings grouped by rule come before the requests table.
         var text = markdown.Output;
-        var summary = text.IndexOf("| **Requests** | 20", StringComparison.Ordinal);
+        var summary = text.IndexOf("| **Requests** | 22", StringComparison.Ordinal);
         var byRule = text.IndexOf("## Findings by rule", StringComparison.Ordinal);
         var samp001 = text.IndexOf("### [SAMP001](", StringComparison.Ordinal);
         var requests = text.IndexOf("## Requests", StringComparison.Ordinal);
@@ -379,7 +404,7 @@ public partial class InventoryToolTests : IClassFixture<InventoryFixture>
         Assert.Equal(total, bySeverity.Values.Sum());
         Assert.All(byRule.Keys, id => Assert.Matches(@"^SAMP\d{3}$", id));
         Assert.All(bySeverity.Keys, s => Assert.Contains(s, new[] { "error", "warning", "info" }));
-        Assert.Equal(5, byRule["SAMP001"]);
+        Assert.Equal(6, byRule["SAMP001"]); // five in C#, one in the prompt directory
         var listed = requests.SelectMany(r => r.GetProperty("findings").EnumerateArray())
             .Select(f => (f.GetProperty("id").GetString(), f.GetProperty("file").GetString(), f.GetProperty("line").GetInt32(), f.GetProperty("message").GetString()))
             .Distinct().Count();
