@@ -54,7 +54,9 @@ namespace Temperance.Files
             };
             var sibling = surface?.SiblingPrompt is { } siblingName ? siblings.Find(path, siblingName, context.CancellationToken) : null;
             var requests = FileRequestReader.Read(path, text, surface, sibling, inTestProject, out var error);
-            if (ReportUnreadable(context, text, error) || requests.Count == 0)
+            // A YAML file that does not parse is ours to report only when it reads like a template or an agent definition: a
+            // Helm chart with Go templating and a "seed:" key is nobody's prompt.
+            if ((kind != FileKind.Yaml || FileSurfaces.LooksLikeYamlSettings(content)) && ReportUnreadable(context, text, error) || error != null || requests.Count == 0)
             {
                 return;
             }

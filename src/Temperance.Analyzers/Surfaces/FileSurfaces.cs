@@ -169,6 +169,14 @@ namespace Temperance.Surfaces
             return false;
         }
 
+        /// <summary>
+        /// Text that marks a YAML file as a prompt template (<c>execution_settings</c>) or an agent definition (a model with
+        /// options), for deciding whether a file that does not parse is worth a SAMP100.
+        /// </summary>
+        public static bool LooksLikeYamlSettings(string text) =>
+            text.IndexOf("execution_settings", StringComparison.Ordinal) >= 0
+            || (text.IndexOf("model:", StringComparison.Ordinal) >= 0 && text.IndexOf("options:", StringComparison.Ordinal) >= 0);
+
         private static readonly string[] QuickKeys = { "temperature", "top_p", "topP", "top_k", "topK", "seed", "penalty", "min_p", "minP", "reasoning", "thinking" };
     }
 }

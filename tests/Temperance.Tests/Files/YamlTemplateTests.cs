@@ -62,6 +62,14 @@ public class YamlTemplateTests
     }
 
     [Fact]
+    public async Task HelmTemplateWithASeedKey_ThatIsNotValidYaml_IsSilent()
+    {
+        // Go templating makes a Helm chart invalid YAML; its "seed" is a database seed, and the file is nobody's prompt.
+        const string chart = "apiVersion: v1\nkind: ConfigMap\ndata:\n  {{- if .Values.seed }}\n  seed: {{ .Values.seed | quote }}\n  {{- end }}\n";
+        await Verify.FilesAsync(new[] { ("/deploy/templates/configmap.yaml", chart) }, null);
+    }
+
+    [Fact]
     public async Task OtherYamlWithATemperatureKey_IsSilent()
     {
         // A sensor configuration is not a prompt template: neither execution_settings nor an agent's model options.
