@@ -153,7 +153,8 @@ namespace Temperance.Files
 
             var model = block.Entries.Where(e => Array.IndexOf(file.Surface.BlockModelKeys, e.Key) >= 0).Select(e => e.Value.Text).FirstOrDefault(t => t != null)
                 ?? file.Surface.ModelPaths.Select(p => file.Root.At(p)).FirstOrDefault(n => n is { Kind: FileNodeKind.Scalar, Text: not null })?.Text;
-            var provider = file.Surface.ProviderPath != null && file.Root.At(file.Surface.ProviderPath)?.Text is { } named
+            var provider = service != null && FileSurfaces.ServiceProviders.TryGetValue(service, out var byService) ? byService
+                : file.Surface.ProviderPath != null && file.Root.At(file.Surface.ProviderPath)?.Text is { } named
                 && file.Surface.ProviderValues.TryGetValue(named, out var mapped) ? mapped : Providers.Generic;
 
             return new Request

@@ -107,6 +107,18 @@ namespace Temperance.Surfaces
             SchemaPaths = new[] { new[] { "output", "schema" } },
         };
 
+        /// <summary>
+        /// Service ids that name a provider (<c>execution_settings: { openai: { … } }</c>): the block goes to that provider.
+        /// Any other service id (<c>default</c>, <c>fast</c>, a deployment) says nothing about where the request goes.
+        /// </summary>
+        public static readonly IReadOnlyDictionary<string, string> ServiceProviders = new Dictionary<string, string>(StringComparer.OrdinalIgnoreCase)
+        {
+            ["openai"] = Providers.OpenAI,
+            ["azure_openai"] = Providers.OpenAI,
+            ["azureopenai"] = Providers.OpenAI,
+            ["ollama"] = Providers.Ollama,
+        };
+
         /// <summary>YAML files are one of two kinds, told apart by their keys; the first that matches wins.</summary>
         public static readonly FileSurface[] Yaml = { PromptTemplate, AgentDefinition };
 

@@ -40,6 +40,17 @@ public class PromptDirectoryTests
     }
 
     [Fact]
+    public async Task ServiceIdNamingAProvider_GivesItsRanges()
+    {
+        // No model_id: the service id "openai" says where the request goes, so OpenAI's range for frequency_penalty
+        // applies; the "local" service says nothing, and the generic table has no bound for it.
+        const string config = """
+            { "execution_settings": { "openai": { {|SAMP005:"frequency_penalty": 2.5|} }, "local": { "frequency_penalty": 2.5 } } }
+            """;
+        await Verify.FilesAsync(new[] { ("/Prompts/Poem/config.json", config), ("/Prompts/Poem/skprompt.txt", PoemPrompt) }, null);
+    }
+
+    [Fact]
     public async Task ExtractionPromptAtHighTemperature_TaskFromSkprompt_Triggers()
     {
         const string config = """
