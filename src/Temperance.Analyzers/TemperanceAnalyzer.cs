@@ -64,6 +64,8 @@ namespace Temperance
             var options = context.Options.AnalyzerConfigOptionsProvider;
             var states = new ConcurrentDictionary<SyntaxTree, TreeState>();
             var generated = new GeneratedCode(context.Compilation, options);
+            // Reads nothing now: the binding scan and appsettings files are read once, when a request first reads a project class's property.
+            var configuration = new ProjectConfiguration(context.Compilation, context.Options.AdditionalFiles);
 
             // Per block: one operation action over the few kinds that create, change or send options, behind a filter that
             // is a handful of symbol comparisons. The driver walks each block's operations once for every analyzer, so
@@ -103,7 +105,7 @@ namespace Temperance
                     var state = states.GetOrAdd(tree, t => new TreeState(new TemperancePolicy(options.GetOptions(t), options.GlobalOptions)));
                     var owner = OwnerOf(block.OwningSymbol);
                     var callContext = tests.ContextOf(owner, state.Policy.TestAttributes);
-                    var requests = RequestBuilder.Build(catalog, callContext, collector, block.OperationBlocks);
+                    var requests = RequestBuilder.Build(catalog, callContext, collector, block.OperationBlocks, configuration, block.CancellationToken);
                     if (requests.Count > 0)
                     {
                         Judge(requests, state, block.ReportDiagnostic);
@@ -135,7 +137,9 @@ namespace Temperance
 
         private static void Judge(IReadOnlyList<ExtractedRequest> requests, TreeState state, System.Action<Diagnostic> report)
         {
-            var reported = new HashSet<(string, Location)>();
+            // A location is judged once; copies of a request per configuration environment are told apart by their message,
+            // which names the file that decided the value (one report per rule, location and deciding file).
+            var reported = new HashSet<(string, Location, string?)>();
             foreach (var extracted in requests)
             {
                 var request = extracted.Request;
@@ -160,7 +164,8 @@ namespace Temperance
 
                     // Clone and with inherit writes; a location is judged once. Code under #line hidden is generated
                     // (Razor, T4) and silent, as the driver would have made it (GeneratedCode.cs says why we decide).
-                    if (!GeneratedCode.IsHidden(finding.Location) && reported.Add((finding.Descriptor.Id, finding.Location)))
+                    var variant = request.Variant == null ? null : string.Join("\u001f", finding.MessageArgs);
+                    if (!GeneratedCode.IsHidden(finding.Location) && reported.Add((finding.Descriptor.Id, finding.Location, variant)))
                     {
                         report(finding.ToDiagnostic());
                     }

@@ -69,6 +69,7 @@ namespace Temperance.Extraction
             request.SendingCallLocation = send.Syntax.GetLocation();
             var client = ClientOf(send);
             request.ClientModelId = ClientModel(client);
+            request.ClientModelIdFrom = request.ClientModelId == null ? ClientModelPath(client) : null;
             request.Endpoint = ClientEndpoint(client);
             if ((scope.Catalog.AdapterOfSend(request.SendingCall) ?? ClientAdapter(client)) is { } adapter)
             {
@@ -161,6 +162,90 @@ namespace Temperance.Extraction
             }
 
             return null;
+        }
+
+        /// <summary>
+        /// When the client's model id is not constant: the property of the project's classes it is read from along the same
+        /// chain (<c>new ChatClient(_options.Model, key)</c>), which configuration may bind.
+        /// </summary>
+        private MemberPath? ClientModelPath(IOperation? client)
+        {
+            foreach (var link in Chain(client))
+            {
+                switch (link)
+                {
+                    case IObjectCreationOperation creation when ModelArgumentPath(creation.Arguments) is { } created:
+                        return created;
+                    case IInvocationOperation call when ModelArgumentPath(call.Arguments) is { } fromFactory:
+                        return fromFactory;
+                    case IFieldReferenceOperation field:
+                        return ModelPathFromSyntax(field.Field);
+                    case IPropertyReferenceOperation property:
+                        return ModelPathFromSyntax(property.Property);
+                }
+            }
+
+            return null;
+        }
+
+        private static MemberPath? ModelArgumentPath(IEnumerable<IArgumentOperation> arguments)
+        {
+            foreach (var argument in arguments)
+            {
+                if (argument.Parameter != null && ClientShapes.ModelParameterNames.Contains(argument.Parameter.Name))
+                {
+                    return MemberPaths.Of(argument.Value);
+                }
+            }
+
+            return null;
+        }
+
+        /// <summary>
+        /// A client kept in a field or property and created elsewhere in its type, read from syntax as <see cref="ModelFromSyntax(ISymbol)"/>
+        /// reads a literal: a named model argument wins, else the first argument of a client factory, else of the first creation.
+        /// </summary>
+        private static MemberPath? ModelPathFromSyntax(ISymbol member)
+        {
+            if (member.ContainingType is not { } scope)
+            {
+                return null;
+            }
+
+            MemberPath? fallback = null;
+            foreach (var value in MemberValues.Of(member))
+            {
+                foreach (var argument in value.DescendantNodesAndSelf().OfType<ArgumentSyntax>())
+                {
+                    var call = argument.Parent?.Parent;
+                    if (argument.NameColon != null)
+                    {
+                        if (ClientShapes.ModelParameterNames.Contains(argument.NameColon.Name.Identifier.ValueText))
+                        {
+                            return MemberPaths.OfSyntax(argument.Expression, scope);
+                        }
+
+                        continue;
+                    }
+
+                    if (argument.Parent is not ArgumentListSyntax list || list.Arguments[0] != argument)
+                    {
+                        continue;
+                    }
+
+                    if (call is InvocationExpressionSyntax { Expression: MemberAccessExpressionSyntax access } && IsClientFactory(access.Name.Identifier.ValueText))
+                    {
+                        return MemberPaths.OfSyntax(argument.Expression, scope);
+                    }
+
+                    if (fallback == null && call is BaseObjectCreationExpressionSyntax)
+                    {
+                        fallback = MemberPaths.OfSyntax(argument.Expression, scope);
+                    }
+                }
+            }
+
+            return fallback;
         }
 
         /// <summary>The constant address the client is pointed at: an endpoint argument, or an Endpoint member of an options argument.</summary>

@@ -26,7 +26,9 @@ namespace Temperance.Extraction
 
         private SurfaceCatalog Catalog => scope.Catalog;
 
-        public static IReadOnlyList<ExtractedRequest> Build(SurfaceCatalog catalog, CallContext context, BlockCollector collected, IReadOnlyList<IOperation> blocks)
+        /// <param name="configuration">What configuration binds to the project's classes; null reads code alone (values read through them stay Unknown).</param>
+        public static IReadOnlyList<ExtractedRequest> Build(SurfaceCatalog catalog, CallContext context, BlockCollector collected, IReadOnlyList<IOperation> blocks,
+            ProjectConfiguration? configuration = null, System.Threading.CancellationToken cancellationToken = default)
         {
             var scope = new BlockScope(catalog, context, blocks);
             var builder = new RequestBuilder(scope);
@@ -79,7 +81,14 @@ namespace Temperance.Extraction
                 instance.Request.TaskSignals.AddRange(prompts);
             }
 
-            return requests.Select(i => i.Request.Freeze()).ToList();
+            // A request reading configuration-bound properties becomes one copy per environment that changes its values.
+            var frozen = new List<ExtractedRequest>(requests.Count);
+            foreach (var instance in requests)
+            {
+                ConfiguredVariants.Freeze(instance.Request, configuration, cancellationToken, frozen);
+            }
+
+            return frozen;
         }
 
         private RequestDraft NewRequest(SurfaceDefinition surface, IOperation at, bool originVisible) =>

@@ -7,7 +7,7 @@ namespace Temperance.Extraction
 {
     /// <summary>
     /// A request while extraction is still reading it: writes, model, shape, send and test facts are filled in as the
-    /// block's operations are read, then <see cref="Freeze"/> makes the immutable <see cref="Request"/> and its
+    /// block's operations are read, then <see cref="Freeze()"/> makes the immutable <see cref="Request"/> and its
     /// <see cref="FixAnchors"/>. Nothing outside Extraction sees a draft.
     /// </summary>
     internal sealed class RequestDraft
@@ -32,6 +32,9 @@ namespace Temperance.Extraction
         public HashSet<Setting> UndeclaredSettings { get; } = new HashSet<Setting>();
         public string? ModelId { get; set; }
         public string? ClientModelId { get; set; }
+        /// <summary>When the model id is not constant but read from a property of the project's classes (configuration may bind it).</summary>
+        public MemberPath? ModelIdFrom { get; set; }
+        public MemberPath? ClientModelIdFrom { get; set; }
         public string? Endpoint { get; set; }
         public ResponseShape ResponseShape { get; set; }
         public string? ResponseShapeEvidence { get; set; }
@@ -61,7 +64,10 @@ namespace Temperance.Extraction
 
         public void AddRange(IEnumerable<SettingWrite> more) => writes.AddRange(more);
 
-        public ExtractedRequest Freeze()
+        public ExtractedRequest Freeze() => Freeze(writes.ToArray(), ModelId, ClientModelId, null, null);
+
+        /// <summary>The request with values resolved elsewhere (<see cref="ConfiguredVariants"/>): its writes, model ids and which copy it is.</summary>
+        public ExtractedRequest Freeze(IReadOnlyList<SettingWrite> resolvedWrites, string? modelId, string? clientModelId, string? modelIdOrigin, string? variant)
         {
             var request = new Request
             {
@@ -70,10 +76,12 @@ namespace Temperance.Extraction
                 Location = Location,
                 Context = Context,
                 OriginVisible = OriginVisible,
-                Writes = writes.ToArray(),
+                Writes = resolvedWrites,
                 UndeclaredSettings = UndeclaredSettings.ToImmutableHashSet(),
-                ModelId = ModelId,
-                ClientModelId = ClientModelId,
+                ModelId = modelId,
+                ClientModelId = clientModelId,
+                ModelIdOrigin = modelIdOrigin,
+                Variant = variant,
                 Endpoint = Endpoint,
                 ResponseShape = ResponseShape,
                 ResponseShapeEvidence = ResponseShapeEvidence,

@@ -81,6 +81,7 @@ namespace Temperance.Extraction
             else if (name == surface.ModelMember)
             {
                 request.ModelId = ValueReader.ConstantString(value) ?? request.ModelId;
+                request.ModelIdFrom = request.ModelId == null ? MemberPaths.Of(value) : null;
             }
             else if (name == surface.ResponseFormatMember)
             {
@@ -164,6 +165,7 @@ namespace Temperance.Extraction
             {
                 instance.PayloadHasModel = true;
                 instance.Request.ModelId = ValueReader.ConstantString(value);
+                instance.Request.ModelIdFrom = instance.Request.ModelId == null ? MemberPaths.Of(value) : null;
                 return;
             }
 

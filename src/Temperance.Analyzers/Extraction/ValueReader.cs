@@ -36,7 +36,8 @@ namespace Temperance.Extraction
                 }
                 else
                 {
-                    yield return new SettingWrite(setting, ValueKind.Unknown, 0, member, location, op.Syntax, kind, conditional, null, fromKey);
+                    // A property of the project's own classes (options bound from configuration) may still become Known: ConfiguredVariants.
+                    yield return new SettingWrite(setting, ValueKind.Unknown, 0, member, location, op.Syntax, kind, conditional, null, fromKey, readFrom: MemberPaths.Of(op));
                 }
             }
         }
@@ -202,7 +203,8 @@ namespace Temperance.Extraction
             return TryReadLiteral(initializer, out number);
         }
 
-        private static bool TryReadLiteral(ExpressionSyntax expression, out double number)
+        /// <summary>A numeric literal, possibly negated, cast or parenthesised (<c>0.2f</c>, <c>-(1)</c>); anything else is not read.</summary>
+        public static bool TryReadLiteral(ExpressionSyntax expression, out double number)
         {
             number = 0;
             switch (expression)

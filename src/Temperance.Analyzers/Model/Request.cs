@@ -43,6 +43,15 @@ namespace Temperance.Model
         public string? Endpoint { get; init; }
         /// <summary>The model id the request goes to: the options' own, else the client's.</summary>
         public string? EffectiveModelId => ModelId ?? ClientModelId;
+        /// <summary>Where <see cref="EffectiveModelId"/> came from when it is not written in code (a configuration key and its file), for messages.</summary>
+        public string? ModelIdOrigin { get; init; }
+
+        /// <summary>
+        /// For one of several copies of a request whose values come from configuration: the deciding files of this copy
+        /// (one copy per environment that changes a value). The analyzer reports a finding once per location and message,
+        /// not once per location, so each environment's value is judged and named. Null for a request read from code alone.
+        /// </summary>
+        public string? Variant { get; init; }
         public ResponseShape ResponseShape { get; init; }
         /// <summary>The response-format evidence as written, for messages ("ChatResponseFormat.CreateJsonSchemaFormat").</summary>
         public string? ResponseShapeEvidence { get; init; }

@@ -9,8 +9,10 @@ namespace Temperance.Model
     internal sealed class SettingWrite
     {
         public SettingWrite(Setting setting, ValueKind kind, double value, string member, Location location,
-            SyntaxNode? valueSyntax, NumericKind literalKind, bool fromConditional, string? origin, bool fromKey = false, FileSpans? inFile = null)
+            SyntaxNode? valueSyntax, NumericKind literalKind, bool fromConditional, string? origin, bool fromKey = false, FileSpans? inFile = null,
+            MemberPath? readFrom = null)
         {
+            ReadFrom = readFrom;
             InFile = inFile;
             FromKey = fromKey;
             Setting = setting;
@@ -43,6 +45,15 @@ namespace Temperance.Model
         public string? Origin { get; }
         /// <summary>For a value written in a settings file: the spans a fix rewrites or deletes there (no syntax node exists).</summary>
         public FileSpans? InFile { get; }
+        /// <summary>For an Unknown value read from a property of the project's own classes: that property, which configuration may bind.</summary>
+        public MemberPath? ReadFrom { get; }
+
+        /// <summary>
+        /// This write with the value its <see cref="ReadFrom"/> property holds elsewhere (a configuration file): Known, said
+        /// where it came from, and with no value syntax, so no fix replaces the property read with a literal.
+        /// </summary>
+        public SettingWrite Resolved(double value, string origin) =>
+            new SettingWrite(Setting, ValueKind.Known, value, Member, Location, null, LiteralKind, FromConditional, origin, FromKey, null, ReadFrom);
     }
 
     /// <summary>Where a value sits in a settings file: the value's text, and what deleting its entry removes (empty: no removal).</summary>

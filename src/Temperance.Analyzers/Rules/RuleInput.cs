@@ -47,8 +47,13 @@ namespace Temperance.Rules
         /// <summary>The provider whose ranges and defaults apply to written values (the request's own, or its model family's for a generic request).</summary>
         public string RangeProvider { get; }
 
-        /// <summary>The model as messages name it: "model 'o3-mini'" or "model 'o3-mini' (deployment 'extractor-prod', temperance.deployment.extractor-prod)".</summary>
-        public string ModelText => ModelMappedBy == null ? $"model '{ModelId}'" : $"model '{ModelId}' ('{Request.EffectiveModelId}' mapped by {ModelMappedBy})";
+        /// <summary>
+        /// The model as messages name it: "model 'o3-mini'", "model 'o3-mini' (deployment 'extractor-prod', temperance.deployment.extractor-prod)",
+        /// and where a model id not written in code came from ("(from configuration 'HarbourLlm:Model' in appsettings.json)").
+        /// </summary>
+        public string ModelText =>
+            (ModelMappedBy == null ? $"model '{ModelId}'" : $"model '{ModelId}' ('{Request.EffectiveModelId}' mapped by {ModelMappedBy})")
+            + (Request.ModelIdOrigin == null ? string.Empty : $" (from {Request.ModelIdOrigin})");
 
         /// <summary>
         /// The reasoning effort in force and what says so: as written, else the family's default; null when the family is

@@ -18,6 +18,9 @@ public static class TestReferences
         "LLamaSharp", "Microsoft.ML.OnnxRuntimeGenAI", "Betalgo.Ranul.OpenAI", "ModelContextProtocol",
         "Microsoft.Extensions.DependencyInjection.Abstractions", "Microsoft.Extensions.Logging.Abstractions",
         "Microsoft.Extensions.VectorData.Abstractions", "Microsoft.Bcl.AsyncInterfaces", "Microsoft.Bcl.HashCode",
+        // Configuration bound to options classes: the binder, options, and the generic host's builder.
+        "Microsoft.Extensions.Configuration", "Microsoft.Extensions.Options", "Microsoft.Extensions.Primitives", "Microsoft.Extensions.Hosting",
+        "Microsoft.Extensions.DependencyInjection", "Microsoft.Extensions.FileProviders.Abstractions", "Microsoft.Extensions.Diagnostics.Abstractions",
         "xunit.assert", "xunit.core", "xunit.abstractions",
         "nunit.framework", "nunit.framework.legacy", "MSTest.TestFramework", "Microsoft.VisualStudio.TestPlatform.TestFramework",
         "AwesomeAssertions", "FluentAssertions", "Shouldly", "Snapshooter", "Snapshooter.Xunit",

@@ -82,6 +82,13 @@ public class ArchitectureTests
         names.UnionWith(TestingSurfaces.MockFactories.Select(f => f.Owner).Where(o => o.Length > 1));
         names.UnionWith(TestingSurfaces.MockingNamespaces.Select(n => n.Split('.')[0]));
         names.Add(TestingSurfaces.InnerHandlerMember);
+        Type(ConfigurationSurface.ConfigurationType);
+        names.UnionWith(ConfigurationSurface.SectionMethods);
+        names.UnionWith(new[]
+        {
+            ConfigurationSurface.ConfigureMethod, ConfigurationSurface.AddOptionsMethod, ConfigurationSurface.BindMethod,
+            ConfigurationSurface.BindConfigurationMethod, ConfigurationSurface.GetMethod, ConfigurationSurface.KeyNameAttribute,
+        });
         foreach (var type in TestingSurfaces.TransportBaseTypes.Concat(TestingSurfaces.TestServerTypes)
             .Append(TestingSurfaces.HttpClientType).Append(TestingSurfaces.DelegatingHandlerType))
         {

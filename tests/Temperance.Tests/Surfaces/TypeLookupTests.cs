@@ -16,7 +16,7 @@ public class TypeLookupTests
             .Concat(AdapterSurfaces.All.SelectMany(a => new[] { a.DeclaringType, a.ReceiverType }))
             .Concat(RawJsonSurface.PayloadTypes)
             .Concat(TestFrameworks.AttributeNames)
-            .Concat(new[] { "System.CodeDom.Compiler.GeneratedCodeAttribute" })
+            .Concat(new[] { "System.CodeDom.Compiler.GeneratedCodeAttribute", ConfigurationSurface.ConfigurationType })
             .OfType<string>()
             .Distinct(StringComparer.Ordinal)
             .Select(name => new object[] { name });
