@@ -63,6 +63,8 @@ public static class Inventory
         var models = new Dictionary<SyntaxTree, SemanticModel>();
         SemanticModel ModelOf(SyntaxTree tree) => models.TryGetValue(tree, out var known) ? known : models[tree] = compilation.GetSemanticModel(tree);
         var generated = new GeneratedCode(compilation, options);
+        // appsettings values copied into requests, as the analyzer reads them (one row per environment that changes a value).
+        var configuration = new ProjectConfiguration(compilation, settingsFiles);
         foreach (var tree in compilation.SyntaxTrees)
         {
             var model = ModelOf(tree);
@@ -81,7 +83,7 @@ public static class Inventory
                 }
 
                 var context = tests.ContextOf(owner, policy.TestAttributes);
-                foreach (var request in RequestBuilder.Build(catalog, context, collector, new[] { operation }).Select(r => r.Request))
+                foreach (var request in RequestBuilder.Build(catalog, context, collector, new[] { operation }, configuration, cancellationToken).Select(r => r.Request))
                 {
                     rows.Add(Row(project, request, policy, diagnostics, ModelOf, libraries));
                 }
@@ -204,15 +206,8 @@ public static class Inventory
     /// </summary>
     private static IReadOnlyList<string> Layers(Request request)
     {
-        var layers = new List<string>();
-        if (SettingsFiles.IsFileRequest(request))
-        {
-            layers.Add("file");
-        }
-        else if (request.Writes.Any(w => !SettingsFiles.FromConfiguration(w)))
-        {
-            layers.Add("code");
-        }
+        // A C# request is built in code even when every value it sends is read from configuration.
+        var layers = new List<string> { SettingsFiles.IsFileRequest(request) ? "file" : "code" };
 
         if (request.Writes.Any(SettingsFiles.FromConfiguration))
         {

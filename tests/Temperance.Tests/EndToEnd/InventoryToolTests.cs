@@ -149,6 +149,15 @@ public partial class InventoryToolTests : IClassFixture<InventoryFixture>
         var rejected = Assert.Single(planner.GetProperty("findings").EnumerateArray());
         Assert.Equal("SAMP007", rejected.GetProperty("id").GetString());
         Assert.Equal(11, rejected.GetProperty("line").GetInt32());
+
+        // A request built in code whose temperature comes from appsettings: one row per environment that changes it,
+        // each marked as layered, the production one with its finding.
+        var bulletins = requests.Where(r => r.GetProperty("file").GetString()!.EndsWith("WeatherBulletin.cs", StringComparison.Ordinal)).ToList();
+        Assert.Equal(2, bulletins.Count);
+        Assert.All(bulletins, b => Assert.Equal(new[] { "code", "configuration" }, b.GetProperty("layers").EnumerateArray().Select(l => l.GetString())));
+        var production = Assert.Single(bulletins, b => b.GetProperty("settings").GetProperty("temperature").GetProperty("value").GetDouble() > 1.5);
+        Assert.Contains("appsettings.Production.json", production.GetProperty("settings").GetProperty("temperature").GetProperty("source").GetString(), StringComparison.Ordinal);
+        Assert.Equal("SAMP009", Assert.Single(production.GetProperty("findings").EnumerateArray()).GetProperty("id").GetString());
     }
 
     [Fact]
@@ -189,7 +198,7 @@ public partial class InventoryToolTests : IClassFixture<InventoryFixture>
 
         // The summary and the findings grouped by rule come before the requests table.
         var text = markdown.Output;
-        var summary = text.IndexOf("| **Requests** | 22", StringComparison.Ordinal);
+        var summary = text.IndexOf("| **Requests** | 24", StringComparison.Ordinal);
         var byRule = text.IndexOf("## Findings by rule", StringComparison.Ordinal);
         var samp001 = text.IndexOf("### [SAMP001](", StringComparison.Ordinal);
         var requests = text.IndexOf("## Requests", StringComparison.Ordinal);
