@@ -13,7 +13,9 @@ using Temperance.CodeFixes;
 
 // Usage: dotnet run -c Release --project tests/Temperance.Benchmarks [-- --lines 100000] [--serial] [--only-temperance]
 //        [--only dense|quiet|none] [--phases] [--real-build [--real-build-runs 3]] [--real-build-only]
-var lines = args.SkipWhile(a => a != "--lines").Skip(1).Select(int.Parse).DefaultIfEmpty(100_000).First();
+//        [--settings-files [--settings-dirs 200]] (quiet C# of 20,000 lines unless --lines is given)
+var settingsFiles = args.Contains("--settings-files");
+var lines = args.SkipWhile(a => a != "--lines").Skip(1).Select(int.Parse).DefaultIfEmpty(settingsFiles ? 20_000 : 100_000).First();
 Console.WriteLine($"Temperance benchmark: {lines:N0} lines, {Environment.ProcessorCount} cores, {RuntimeInformationText()}");
 
 var framework = Basic.Reference.Assemblies.Net100.References.All.Cast<MetadataReference>().ToList();
@@ -28,8 +30,16 @@ if (args.Contains("--real-build-only"))
 }
 
 const int Runs = 5; // each measurement is the median of this many runs
-var netAnalyzers = onlyTemperance ? ImmutableArray<DiagnosticAnalyzer>.Empty : LoadNetAnalyzers();
 var table = new Temperance.Inventory.RulesTableOptions(Temperance.Inventory.RulesTableOptions.FindTable());
+if (settingsFiles)
+{
+    // Temperance alone: settings files are its own cost, and NetAnalyzers only add noise to it on two cores.
+    var directories = args.SkipWhile(a => a != "--settings-dirs").Skip(1).Select(int.Parse).DefaultIfEmpty(200).First();
+    await SettingsFiles.Run(lines, directories, framework, framework.Concat(sdks).ToList(), table, Runs);
+    return 0;
+}
+
+var netAnalyzers = onlyTemperance ? ImmutableArray<DiagnosticAnalyzer>.Empty : LoadNetAnalyzers();
 Console.WriteLine($"NetAnalyzers 11.0.100: {netAnalyzers.Length} analyzers, every rule enabled");
 
 if (args.Contains("--phases"))
@@ -51,6 +61,8 @@ if (only != null)
 var dense = await Measure("dense", SyntheticProject.Generate(lines, ProjectKind.Dense), framework.Concat(sdks).ToList(), netAnalyzers, table);
 var quiet = await Measure("quiet", SyntheticProject.Generate(lines, ProjectKind.Quiet), framework.Concat(sdks).ToList(), netAnalyzers, table);
 var none = await Measure("none", SyntheticProject.Generate(lines, ProjectKind.None), framework, netAnalyzers, table);
+// A small settings-files measurement (the full one: --settings-files); printed under the table, in CI's last 12 lines.
+var settingsLine = await SettingsFiles.Short(Math.Min(lines, 2_000), lines <= 2_000 ? quiet.CompileMs : null, framework.Concat(sdks).ToList(), table, Runs);
 
 Console.WriteLine();
 Console.WriteLine($"{"project",-7} {"compile ms",10} {"telemetry ms",13} {"telemetry/compile",18} {"NetAnalyzers median ms",23} {"telemetry/median",17} {"floor ms",9} {"floor/compile",14} {"above floor/compile",20} {"diagnostics",12}");
@@ -59,7 +71,7 @@ foreach (var r in new[] { dense, quiet, none })
     Console.WriteLine($"{r.Name,-7} {r.CompileMs,10:N0} {r.TemperanceMs,13:N1} {r.TemperanceMs / r.CompileMs * 100,17:N2}% {r.MedianMs,23:N1} {r.TemperanceMs / Math.Max(r.MedianMs, 0.001),17:N2} {r.FloorMs,9:N1} {r.FloorMs / r.CompileMs * 100,13:N2}% {(r.TemperanceActions == 0 ? "n/a (no actions)" : $"{(r.TemperanceMs - r.FloorMs) / r.CompileMs * 100:N2}%"),20} {r.Diagnostics,12:N0}");
 }
 
-Console.WriteLine();
+Console.WriteLine(settingsLine);
 // The wall-time difference is printed for information only: on a 2-core machine it moves by a second between runs.
 Console.WriteLine($"target: Temperance telemetry <= 2% of compile time (dense): {(dense.TemperanceMs / dense.CompileMs <= 0.02 ? "met" : "NOT met")} ({dense.TemperanceMs / dense.CompileMs * 100:N1}%)");
 Console.WriteLine($"target: Temperance telemetry <= median NetAnalyzers analyzer (dense): {(dense.TemperanceMs <= dense.MedianMs ? "met" : "NOT met")}");
