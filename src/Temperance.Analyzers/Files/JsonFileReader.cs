@@ -1,6 +1,5 @@
 using System;
 using System.Collections.Generic;
-using System.Globalization;
 using System.IO;
 using Microsoft.CodeAnalysis.Text;
 using Newtonsoft.Json;
@@ -28,7 +27,8 @@ namespace Temperance.Files
                 var root = ReadValue(reader, text);
                 if (ReadSkippingComments(reader))
                 {
-                    throw new JsonReaderException($"Additional text after the end of the JSON value. Path '', line {reader.LineNumber}, position {reader.LinePosition}.");
+                    error = new FileParseError("Additional text after the end of the JSON value.", reader.LineNumber, reader.LinePosition);
+                    return null;
                 }
 
                 return root;
@@ -38,6 +38,49 @@ namespace Temperance.Files
                 var info = e as JsonReaderException;
                 error = new FileParseError(FirstSentence(e.Message), info?.LineNumber ?? 0, info?.LinePosition ?? 0);
                 return null;
+            }
+        }
+
+        /// <summary>
+        /// Whether a JSON file parses, without building its tree: a plain pass of the reader, for a large file that is only
+        /// checked (appsettings.json, whose values are read where C# binds them).
+        /// </summary>
+        public static FileParseError? Validate(string content)
+        {
+            try
+            {
+                using var reader = new JsonTextReader(new StringReader(content)) { DateParseHandling = DateParseHandling.None };
+                var depth = 0;
+                var complete = false;
+                while (ReadSkippingComments(reader))
+                {
+                    if (complete)
+                    {
+                        return new FileParseError("Additional text after the end of the JSON value.", reader.LineNumber, reader.LinePosition);
+                    }
+
+                    switch (reader.TokenType)
+                    {
+                        case JsonToken.StartObject:
+                        case JsonToken.StartArray:
+                            depth++;
+                            break;
+                        case JsonToken.EndObject:
+                        case JsonToken.EndArray:
+                            depth--;
+                            break;
+                    }
+
+                    complete = depth == 0 && reader.TokenType != JsonToken.PropertyName;
+                }
+
+                return complete || depth == 0 && reader.LineNumber == 0 ? null // complete, or an empty file
+                    : new FileParseError("Unexpected end of the file.", reader.LineNumber, reader.LinePosition);
+            }
+            catch (JsonException e)
+            {
+                var info = e as JsonReaderException;
+                return new FileParseError(FirstSentence(e.Message), info?.LineNumber ?? 0, info?.LinePosition ?? 0);
             }
         }
 
@@ -99,7 +142,7 @@ namespace Temperance.Files
         {
             if (!ReadSkippingComments(reader))
             {
-                throw new JsonReaderException($"Unexpected end of the file. Path '{reader.Path}', line {reader.LineNumber}, position {reader.LinePosition}.");
+                throw new JsonReaderException("Unexpected end of the file.", reader.Path, reader.LineNumber, reader.LinePosition, null);
             }
 
             return reader.TokenType;

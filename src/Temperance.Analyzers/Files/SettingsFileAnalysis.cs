@@ -41,8 +41,7 @@ namespace Temperance.Files
             if (kind == FileKind.AppSettings)
             {
                 // Configuration is judged where C# copies it into a request; here only that the file can be read at all.
-                JsonFileReader.Read(text, out var configError);
-                ReportUnreadable(context, text, configError);
+                ReportUnreadable(context, text, JsonFileReader.Validate(content));
                 return;
             }
 
