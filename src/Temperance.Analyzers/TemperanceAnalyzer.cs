@@ -52,8 +52,8 @@ namespace Temperance
             // Settings files (prompt directories, YAML templates, agent definitions, front-matter prompts) hold requests too;
             // they are judged whether or not an SDK is referenced here, since the loader may live in another project.
             var tests = TestFrameworks.Resolve(context.Compilation, context.Options.AnalyzerConfigOptionsProvider.GlobalOptions);
-            var siblings = new PromptSiblings(context.Options.AdditionalFiles);
-            context.RegisterAdditionalFileAction(file => SettingsFileAnalysis.Analyze(file, tests.InTestProject, siblings));
+            var settingsFiles = new SettingsFileContext(context.Options.AdditionalFiles);
+            context.RegisterAdditionalFileAction(file => SettingsFileAnalysis.Analyze(file, tests.InTestProject, settingsFiles));
 
             var catalog = SurfaceCatalog.Resolve(context.Compilation, config.Surfaces, config.RawJson);
             if (!catalog.HasSdkSurfaces && !catalog.RawJsonEnabled)

@@ -48,7 +48,7 @@ internal static class SettingsFiles
     /// <summary>Every request the analyzer's file front end reads in these files, with the file it came from.</summary>
     public static IEnumerable<(AdditionalText File, Request Request)> Requests(ImmutableArray<AdditionalText> files, bool inTestProject, CancellationToken cancellationToken)
     {
-        var siblings = new PromptSiblings(files);
+        var siblings = new SettingsFileContext(files);
         foreach (var file in files)
         {
             var name = Path.GetFileName(file.Path);

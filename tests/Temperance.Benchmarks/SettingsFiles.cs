@@ -192,10 +192,10 @@ public static class SettingsFiles
                     _ = SiblingAsWritten(files, config.Path, "skprompt.txt") ?? throw new InvalidOperationException("no sibling");
                 }
             });
-            // The shipped lookup: PromptSiblings indexes the additional files once per compilation.
+            // The shipped lookup: SettingsFileContext indexes the additional files once per compilation.
             var indexed = Time(runs, () =>
             {
-                var siblings = new PromptSiblings(files);
+                var siblings = new SettingsFileContext(files);
                 foreach (var config in configs)
                 {
                     _ = siblings.Find(config.Path, "skprompt.txt", CancellationToken.None) ?? throw new InvalidOperationException("no sibling");
@@ -209,7 +209,7 @@ public static class SettingsFiles
                 }
             });
             Console.WriteLine($"  sibling lookup, {count,5:N0} directories ({files.Length,5:N0} additional files): a scan per file (the first version) {written,8:N2} ms ({written * 1000 / count,6:N1} µs and"
-                + $" {allocatedWritten / 1024.0 / count,5:N1} KB per directory); PromptSiblings (shipped, indexed once) {indexed,6:N2} ms ({indexed * 1000 / count,4:N1} µs per directory)");
+                + $" {allocatedWritten / 1024.0 / count,5:N1} KB per directory); SettingsFileContext (shipped, indexed once) {indexed,6:N2} ms ({indexed * 1000 / count,4:N1} µs per directory)");
         }
 
         var sample = SettingsFileSet.Generate(200, 100, 5_000);
