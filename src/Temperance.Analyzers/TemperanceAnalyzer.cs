@@ -65,7 +65,8 @@ namespace Temperance
             var states = new ConcurrentDictionary<SyntaxTree, TreeState>();
             var generated = new GeneratedCode(context.Compilation, options);
             // Reads nothing now: the binding scan and appsettings files are read once, when a request first reads a project class's property.
-            var configuration = new ProjectConfiguration(context.Compilation, context.Options.AdditionalFiles);
+            var configuration = new ProjectConfiguration(context.Compilation, context.Options.AdditionalFiles,
+                options.GlobalOptions.TryGetValue("build_property.MSBuildProjectDirectory", out var projectDirectory) ? projectDirectory : null);
 
             // Per block: one operation action over the few kinds that create, change or send options, behind a filter that
             // is a handful of symbol comparisons. The driver walks each block's operations once for every analyzer, so

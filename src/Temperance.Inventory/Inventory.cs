@@ -64,7 +64,7 @@ public static class Inventory
         SemanticModel ModelOf(SyntaxTree tree) => models.TryGetValue(tree, out var known) ? known : models[tree] = compilation.GetSemanticModel(tree);
         var generated = new GeneratedCode(compilation, options);
         // appsettings values copied into requests, as the analyzer reads them (one row per environment that changes a value).
-        var configuration = new ProjectConfiguration(compilation, settingsFiles);
+        var configuration = new ProjectConfiguration(compilation, settingsFiles, Path.GetDirectoryName(project.FilePath));
         foreach (var tree in compilation.SyntaxTrees)
         {
             var model = ModelOf(tree);

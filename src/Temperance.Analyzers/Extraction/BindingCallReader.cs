@@ -34,8 +34,11 @@ namespace Temperance.Extraction
             switch (name)
             {
                 // services.Configure<T>(configuration.GetSection("S")), also with an options name first.
+                // With an options name first (Configure<T>("night", section)) only that named instance is bound; code may read
+                // it by name or read the default instance, which syntax cannot tell apart: the class counts as ambiguous.
                 case ConfigurationSurface.ConfigureMethod when TypeArgument(generic) is { } configured:
-                    return arguments.Select(a => SectionPath(a.Expression)).FirstOrDefault(s => s != null) is { } configuredSection
+                    return arguments.Count >= 2 && SectionPath(arguments[0].Expression) == null ? (configured, ConfigurationBindings.NamedInstance)
+                        : arguments.Select(a => SectionPath(a.Expression)).FirstOrDefault(s => s != null) is { } configuredSection
                         ? (configured, configuredSection) : null;
 
                 // section.Get<T>()

@@ -26,8 +26,14 @@ namespace Temperance.Extraction
             this.writtenByCode = writtenByCode;
         }
 
-        /// <summary>The one section the class is bound to; null when none, or several.</summary>
-        public string? Section => sections.Count == 1 ? sections.First() : null;
+        /// <summary>No binding at all (a class whose simple name is not unique in the project).</summary>
+        public static ConfigurationBindings None => new ConfigurationBindings(new HashSet<string>(), new HashSet<string>());
+
+        /// <summary>Stands for a named instance's binding: its presence makes the class ambiguous.</summary>
+        public const string NamedInstance = "\0named";
+
+        /// <summary>The one section the class is bound to; null when none, several, or a named instance is bound too.</summary>
+        public string? Section => sections.Count == 1 && !sections.Contains(NamedInstance) ? sections.First() : null;
 
         /// <summary>
         /// Whether code writes the member (or an object above it) on an instance handed to a lambda for the class

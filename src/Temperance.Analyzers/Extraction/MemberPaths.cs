@@ -146,11 +146,26 @@ namespace Temperance.Extraction
                     && local.DeclaringSyntaxReferences[0].GetSyntax() is VariableDeclaratorSyntax { Initializer.Value: BaseObjectCreationExpressionSyntax creation } declarator:
                     var writesMember = creation.Initializer?.Expressions.OfType<AssignmentExpressionSyntax>()
                         .Any(a => a.Left is IdentifierNameSyntax { Identifier.ValueText: var name } && name == member) == true;
-                    return writesMember || !BoundInItsMember(declarator, local.Name);
+                    return writesMember || !BoundInItsMember(declarator, local.Name) || WrittenInItsMember(declarator, local.Name, member);
+                // A field or property holding an instance it creates (= new DeskOptions()) holds code's values, not a section's.
+                case IFieldReferenceOperation { Field: var field } when Initializer(field.DeclaringSyntaxReferences) is BaseObjectCreationExpressionSyntax:
+                    return true;
+                case IPropertyReferenceOperation { Property: var property } when property.DeclaringSyntaxReferences.Length == 1
+                    && property.DeclaringSyntaxReferences[0].GetSyntax() is PropertyDeclarationSyntax { Initializer.Value: BaseObjectCreationExpressionSyntax }:
+                    return true;
                 default:
                     return false;
             }
         }
+
+        private static ExpressionSyntax? Initializer(System.Collections.Immutable.ImmutableArray<SyntaxReference> references) =>
+            references.Length == 1 && references[0].GetSyntax() is VariableDeclaratorSyntax { Initializer.Value: var value } ? value : null;
+
+        /// <summary>The member is assigned on the local in its body (<c>bakery.Temperature = 0.2f</c> after the Bind): code decides it.</summary>
+        private static bool WrittenInItsMember(SyntaxNode declarator, string local, string member) =>
+            BindingCallReader.BodyOf(declarator).DescendantNodes().OfType<AssignmentExpressionSyntax>().Any(a =>
+                a.Left is MemberAccessExpressionSyntax { Expression: IdentifierNameSyntax { Identifier.ValueText: var name }, Name.Identifier.ValueText: var assigned }
+                && name == local && assigned == member);
 
         private static bool BoundInItsMember(SyntaxNode declarator, string local)
         {

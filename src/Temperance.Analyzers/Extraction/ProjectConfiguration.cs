@@ -26,10 +26,15 @@ namespace Temperance.Extraction
             new System.Collections.Concurrent.ConcurrentDictionary<string, ConfigurationBindings>(System.StringComparer.Ordinal);
         private Loaded? loaded;
 
-        public ProjectConfiguration(Compilation compilation, ImmutableArray<AdditionalText> files)
+        private readonly string? projectDirectory;
+
+        /// <param name="projectDirectory">MSBuildProjectDirectory when the build makes it visible (the package does): the app's
+        /// configuration is the appsettings files there, never a copy deeper in the tree.</param>
+        public ProjectConfiguration(Compilation compilation, ImmutableArray<AdditionalText> files, string? projectDirectory = null)
         {
             this.compilation = compilation;
             this.files = files;
+            this.projectDirectory = projectDirectory;
         }
 
         /// <summary>The environments told apart, base first: "appsettings.json", then "appsettings.json + appsettings.Production.json" …</summary>
@@ -158,7 +163,16 @@ namespace Temperance.Extraction
         /// <summary>Once per class and compilation (a race may scan twice, with the same answer); a cancelled scan caches nothing.</summary>
         private ConfigurationBindings BindingsOf(INamedTypeSymbol type, CancellationToken cancellationToken) =>
             bindingsByClass.TryGetValue(type.Name, out var known) ? known
-            : bindingsByClass.GetOrAdd(type.Name, ConfigurationBindings.Scan(compilation, type.Name, cancellationToken));
+            : bindingsByClass.GetOrAdd(type.Name, NameIsUnique(type, cancellationToken)
+                ? ConfigurationBindings.Scan(compilation, type.Name, cancellationToken)
+                : ConfigurationBindings.None);
+
+        /// <summary>
+        /// Binding calls name a class by its simple name (syntax, no semantic model): with two classes of that name in the
+        /// project (Ferry.DeskOptions, Bakery.DeskOptions) a call cannot be told to bind one or the other, so neither is bound.
+        /// </summary>
+        private bool NameIsUnique(INamedTypeSymbol type, CancellationToken cancellationToken) =>
+            compilation.GetSymbolsWithName(type.Name, SymbolFilter.Type, cancellationToken).Take(2).Count() == 1;
 
         private Loaded Load(CancellationToken cancellationToken)
         {
@@ -171,7 +185,7 @@ namespace Temperance.Extraction
             // Once per compilation; a cancelled load leaves nothing behind, so the next caller reads again.
             lock (gate)
             {
-                return loaded ??= new Loaded(AppSettingsLayers.Read(files, cancellationToken));
+                return loaded ??= new Loaded(AppSettingsLayers.Read(files, projectDirectory, cancellationToken));
             }
         }
 

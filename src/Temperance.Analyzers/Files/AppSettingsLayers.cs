@@ -31,7 +31,7 @@ namespace Temperance.Files
         /// <summary>Each appsettings.{Environment}.json beside it, by file name.</summary>
         public IReadOnlyList<AppSettingsLayer> Environments { get; }
 
-        public static AppSettingsLayers Read(ImmutableArray<AdditionalText> files, CancellationToken cancellationToken)
+        public static AppSettingsLayers Read(ImmutableArray<AdditionalText> files, string? projectDirectory, CancellationToken cancellationToken)
         {
             var candidates = files.Where(f => EnvironmentOf(Path.GetFileName(f.Path)) != null).ToList();
             if (candidates.Count == 0)
@@ -39,8 +39,10 @@ namespace Temperance.Files
                 return new AppSettingsLayers(null, NoLayers);
             }
 
+            // The project's folder when the build says which it is; else the top-most folder holding an appsettings.json.
             var bases = candidates.Where(f => EnvironmentOf(Path.GetFileName(f.Path)) == string.Empty).ToList();
-            var root = bases.Count > 0
+            var root = !string.IsNullOrEmpty(projectDirectory) ? projectDirectory!.TrimEnd('/', '\\')
+                : bases.Count > 0
                 ? Path.GetDirectoryName(bases.OrderBy(f => f.Path.Length).ThenBy(f => f.Path, StringComparer.Ordinal).First().Path)
                 : Path.GetDirectoryName(candidates.OrderBy(f => f.Path.Length).ThenBy(f => f.Path, StringComparer.Ordinal).First().Path);
             AppSettingsLayer? baseLayer = null;

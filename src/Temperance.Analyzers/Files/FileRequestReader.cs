@@ -78,7 +78,8 @@ namespace Temperance.Files
         }
 
         private static bool Recognises(FileSurface surface, FileNode root) =>
-            surface.RecognisedBy.Any(path => root.At(path) is { Kind: FileNodeKind.Mapping });
+            surface.RecognisedBy.Any(path => root.At(path) is { Kind: FileNodeKind.Mapping })
+            && (surface.AlsoNeedsOneOf.Length == 0 || surface.AlsoNeedsOneOf.Any(path => root.At(path) != null));
 
         private static IEnumerable<(FileEntry Key, FileNode Block, string? Name)> Blocks(FileNode root, FileSurface surface)
         {
@@ -119,7 +120,8 @@ namespace Temperance.Files
                         continue; // null: not set
                     }
 
-                    var known = entry.Value.Kind == FileNodeKind.Scalar && double.TryParse(entry.Value.Text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value);
+                    var known = entry.Value.Kind == FileNodeKind.Scalar && double.TryParse(entry.Value.Text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value)
+                        && !double.IsNaN(value) && !double.IsInfinity(value); // NaN and infinities bind to nothing a provider takes: Unknown
                     writes.Add(new SettingWrite(setting, known ? ValueKind.Known : ValueKind.Unknown, known ? double.Parse(entry.Value.Text!, NumberStyles.Float, CultureInfo.InvariantCulture) : 0,
                         entry.Key, file.Location(entry.Span), null, setting is Setting.Seed or Setting.TopK or Setting.Candidates ? NumericKind.Int : NumericKind.Double, fromConditional: false,
                         origin: known ? null : $"'{entry.Value.Text ?? "…"}', computed when the file is loaded", fromKey: true,
@@ -163,7 +165,9 @@ namespace Temperance.Files
                 Surface = service == null ? $"{file.Surface.Name} {file.FileName}" : $"{file.Surface.Name} {file.FileName} (service '{service}')",
                 Location = file.Location(blockKey.KeySpan),
                 Context = inTestProject ? TestDataContext : FileContext,
-                OriginVisible = true,
+                // A YAML merge key (<<: *base) brings settings this reader does not follow: what the block does not write is
+                // then Unknown, not the provider's default.
+                OriginVisible = block.Entry("<<") == null,
                 Writes = writes,
                 ModelId = ModelIdOf(model),
                 ResponseShape = shape,

@@ -18,13 +18,13 @@ namespace Temperance.Files
             error = null;
             try
             {
-                using var reader = new JsonTextReader(new StringReader(text.ToString())) { DateParseHandling = DateParseHandling.None, FloatParseHandling = FloatParseHandling.Double };
+                using var reader = new JsonTextReader(new StringReader(WithoutBom(text.ToString()))) { DateParseHandling = DateParseHandling.None, FloatParseHandling = FloatParseHandling.Double };
                 if (!ReadSkippingComments(reader))
                 {
                     return null; // empty file
                 }
 
-                var root = ReadValue(reader, text);
+                var root = ReadValue(reader, text, LineStarts(text));
                 if (ReadSkippingComments(reader))
                 {
                     error = new FileParseError("Additional text after the end of the JSON value.", reader.LineNumber, reader.LinePosition);
@@ -49,7 +49,7 @@ namespace Temperance.Files
         {
             try
             {
-                using var reader = new JsonTextReader(new StringReader(content)) { DateParseHandling = DateParseHandling.None };
+                using var reader = new JsonTextReader(new StringReader(WithoutBom(content))) { DateParseHandling = DateParseHandling.None };
                 var depth = 0;
                 var complete = false;
                 while (ReadSkippingComments(reader))
@@ -84,48 +84,61 @@ namespace Temperance.Files
             }
         }
 
-        private static FileNode ReadValue(JsonTextReader reader, SourceText text)
+        private static FileNode ReadValue(JsonTextReader reader, SourceText text, int[] lines)
         {
             switch (reader.TokenType)
             {
                 case JsonToken.StartObject:
                 {
-                    var start = End(reader, text) - 1;
+                    var start = End(reader, lines) - 1;
                     var entries = new List<FileEntry>();
+                    var previousEnd = start + 1;
                     while (Next(reader) != JsonToken.EndObject)
                     {
-                        var name = (string)reader.Value!;
-                        var keySpan = KeySpan(text, ColonOffset(reader, text));
+                        if (reader.TokenType != JsonToken.PropertyName || reader.Value is not string name)
+                        {
+                            throw Unsupported(reader);
+                        }
+
+                        var keySpan = KeySpan(text, ColonOffset(reader, lines));
                         Next(reader);
-                        var value = ReadValue(reader, text);
-                        entries.Add(new FileEntry(name, keySpan, value, Removal(text, keySpan.Start, value.Span.End)));
+                        var value = ReadValue(reader, text, lines);
+                        entries.Add(new FileEntry(name, keySpan, value, Removal(text, previousEnd, keySpan.Start, value.Span.End)));
+                        previousEnd = value.Span.End;
                     }
 
-                    return FileNode.Mapping(TextSpan.FromBounds(start, End(reader, text)), entries);
+                    return FileNode.Mapping(TextSpan.FromBounds(start, End(reader, lines)), entries);
                 }
 
                 case JsonToken.StartArray:
                 {
-                    var start = End(reader, text) - 1;
+                    var start = End(reader, lines) - 1;
                     var items = new List<FileNode>();
                     while (Next(reader) != JsonToken.EndArray)
                     {
-                        items.Add(ReadValue(reader, text));
+                        items.Add(ReadValue(reader, text, lines));
                     }
 
-                    return FileNode.Sequence(TextSpan.FromBounds(start, End(reader, text)), items);
+                    return FileNode.Sequence(TextSpan.FromBounds(start, End(reader, lines)), items);
                 }
 
                 case JsonToken.String:
                 {
-                    var end = End(reader, text);
+                    var end = End(reader, lines);
                     return FileNode.Scalar(TextSpan.FromBounds(StringStart(text, end - 1), end), (string?)reader.Value, quoted: true);
                 }
+
+                case JsonToken.StartConstructor:
+                case JsonToken.Raw:
+                case JsonToken.Bytes:
+                case JsonToken.Undefined:
+                    // Json.NET extensions (new Date(…)) that no prompt loader or configuration provider reads.
+                    throw Unsupported(reader);
 
                 default:
                 {
                     // Numbers, true, false, null: the raw text is the value (1.0 stays "1.0", as a fix must see it).
-                    var end = End(reader, text);
+                    var end = End(reader, lines);
                     var start = end;
                     while (start > 0 && IsBareTokenChar(text[start - 1]))
                     {
@@ -161,15 +174,41 @@ namespace Temperance.Files
             return false;
         }
 
-        /// <summary>The offset just after the token the reader is on (Json.NET's line position counts from 1 to the token's last character).</summary>
-        private static int End(JsonTextReader reader, SourceText text)
+        /// <summary>A byte-order mark left in the text (one the decoder kept) read as a space: same length, same positions.</summary>
+        private static string WithoutBom(string content) => content.Length > 0 && content[0] == '\uFEFF' ? " " + content.Substring(1) : content;
+
+        private static JsonReaderException Unsupported(JsonTextReader reader) =>
+            new JsonReaderException($"Unsupported JSON token {reader.TokenType}.", reader.Path, reader.LineNumber, reader.LinePosition, null);
+
+        /// <summary>
+        /// Where each line starts, as Json.NET counts lines (\r\n, \r or \n). Not Roslyn's lines: those also break at
+        /// U+2028, U+2029 and U+0085, which may sit inside a JSON string.
+        /// </summary>
+        private static int[] LineStarts(SourceText text)
         {
-            var line = text.Lines[Math.Max(0, Math.Min(reader.LineNumber - 1, text.Lines.Count - 1))];
-            return Math.Min(line.Start + reader.LinePosition, line.EndIncludingLineBreak);
+            var starts = new List<int> { 0 };
+            for (var i = 0; i < text.Length; i++)
+            {
+                if (text[i] == '\r' && i + 1 < text.Length && text[i + 1] == '\n')
+                {
+                    i++;
+                }
+
+                if (text[i] is '\r' or '\n')
+                {
+                    starts.Add(i + 1);
+                }
+            }
+
+            return starts.ToArray();
         }
 
+        /// <summary>The offset just after the token the reader is on (Json.NET's line position counts from 1 to the token's last character).</summary>
+        private static int End(JsonTextReader reader, int[] lines) =>
+            lines[Math.Max(0, Math.Min(reader.LineNumber - 1, lines.Length - 1))] + reader.LinePosition;
+
         /// <summary>For a property name, Json.NET stops on the colon that follows it.</summary>
-        private static int ColonOffset(JsonTextReader reader, SourceText text) => Math.Max(0, End(reader, text) - 1);
+        private static int ColonOffset(JsonTextReader reader, int[] lines) => Math.Max(0, End(reader, lines) - 1);
 
         private static TextSpan KeySpan(SourceText text, int colon)
         {
@@ -225,7 +264,7 @@ namespace Temperance.Files
         /// What deleting an entry removes: the entry and its comma (the following one, or the preceding one for the last
         /// entry), and the whole line when the entry had it to itself.
         /// </summary>
-        private static TextSpan Removal(SourceText text, int start, int end)
+        private static TextSpan Removal(SourceText text, int previousEnd, int start, int end)
         {
             var after = end;
             while (after < text.Length && text[after] is ' ' or '\t')
@@ -239,15 +278,11 @@ namespace Temperance.Files
             }
             else
             {
-                var before = start;
-                while (before > 0 && char.IsWhiteSpace(text[before - 1]))
+                // The last entry: its comma is the first thing after the previous value that is neither space nor a comment.
+                var comma = NextToken(text, previousEnd, start);
+                if (comma >= 0 && text[comma] == ',')
                 {
-                    before--;
-                }
-
-                if (before > 0 && text[before - 1] == ',')
-                {
-                    return TextSpan.FromBounds(before - 1, end);
+                    return TextSpan.FromBounds(comma, end);
                 }
             }
 
@@ -259,6 +294,44 @@ namespace Temperance.Files
             }
 
             return TextSpan.FromBounds(start, end);
+        }
+
+        /// <summary>The offset of the first character in [start, end) that is neither white space nor inside a comment; -1 if none.</summary>
+        private static int NextToken(SourceText text, int start, int end)
+        {
+            for (var i = start; i < end; i++)
+            {
+                if (char.IsWhiteSpace(text[i]))
+                {
+                    continue;
+                }
+
+                if (text[i] == '/' && i + 1 < end && text[i + 1] == '/')
+                {
+                    while (i < end && text[i] != '\n' && text[i] != '\r')
+                    {
+                        i++;
+                    }
+
+                    continue;
+                }
+
+                if (text[i] == '/' && i + 1 < end && text[i + 1] == '*')
+                {
+                    var close = text.ToString(TextSpan.FromBounds(i + 2, end)).IndexOf("*/", StringComparison.Ordinal);
+                    if (close < 0)
+                    {
+                        return -1;
+                    }
+
+                    i += close + 3;
+                    continue;
+                }
+
+                return i;
+            }
+
+            return -1;
         }
 
         internal static bool IsBlank(SourceText text, int start, int end)

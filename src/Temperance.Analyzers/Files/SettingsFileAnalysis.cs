@@ -19,6 +19,20 @@ namespace Temperance.Files
     {
         public static void Analyze(AdditionalFileAnalysisContext context, bool inTestProject, SettingsFileContext shared)
         {
+            try
+            {
+                AnalyzeFile(context, inTestProject, shared);
+            }
+            catch (Exception e) when (e is not OperationCanceledException)
+            {
+                // A parser's surprise is the file's problem, not the build's: said once, naming the file, never a crash.
+                ReportUnreadable(context, context.AdditionalFile.GetText(context.CancellationToken) ?? SourceText.From(string.Empty),
+                    new FileParseError(e.Message, 1, 1));
+            }
+        }
+
+        private static void AnalyzeFile(AdditionalFileAnalysisContext context, bool inTestProject, SettingsFileContext shared)
+        {
             var path = context.AdditionalFile.Path;
             var kind = KindOf(path);
             if (kind == FileKind.None)
@@ -41,7 +55,11 @@ namespace Temperance.Files
             if (kind == FileKind.AppSettings)
             {
                 // Configuration is judged where C# copies it into a request; here only that the file can be read at all.
-                ReportUnreadable(context, text, JsonFileReader.Validate(content));
+                if (!inTestProject)
+                {
+                    ReportUnreadable(context, text, JsonFileReader.Validate(content));
+                }
+
                 return;
             }
 
@@ -55,7 +73,8 @@ namespace Temperance.Files
             var requests = FileRequestReader.Read(path, text, surface, sibling, inTestProject, out var error);
             // A YAML file that does not parse is ours to report only when it reads like a template or an agent definition: a
             // Helm chart with Go templating and a "seed:" key is nobody's prompt.
-            if ((kind != FileKind.Yaml || FileSurfaces.LooksLikeYamlSettings(content)) && ReportUnreadable(context, text, error) || error != null || requests.Count == 0)
+            // A test project's files are its test data, broken ones included.
+            if (!inTestProject && (kind != FileKind.Yaml || FileSurfaces.LooksLikeYamlSettings(content)) && ReportUnreadable(context, text, error) || error != null || requests.Count == 0)
             {
                 return;
             }

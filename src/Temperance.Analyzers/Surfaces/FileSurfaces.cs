@@ -35,6 +35,8 @@ namespace Temperance.Surfaces
         public string? SiblingPrompt { get; init; }
         /// <summary>The path of keys that must be present for the file to be of this kind (<c>execution_settings</c>).</summary>
         public string[][] RecognisedBy { get; init; } = new string[0][];
+        /// <summary>Paths of which at least one must also be present (none: the recognising keys are enough).</summary>
+        public string[][] AlsoNeedsOneOf { get; init; } = new string[0][];
         /// <summary>Paths to settings blocks; <c>*</c> stands for every entry of a mapping (one block per service id).</summary>
         public string[][] Blocks { get; init; } = new string[0][];
         /// <summary>Keys inside a block that name the model.</summary>
@@ -87,6 +89,9 @@ namespace Temperance.Surfaces
         public static readonly FileSurface AgentDefinition = new FileSurface("agent definition", SettingsFileSyntax.Yaml)
         {
             RecognisedBy = new[] { new[] { "model", "options" } },
+            // The shape alone is weak (an oven profile has model → options → temperature too): an agent file also says
+            // what it is (kind: Prompt, type: chat_completion_agent) or gives the agent instructions.
+            AlsoNeedsOneOf = new[] { new[] { "kind" }, new[] { "type" }, new[] { "instructions" } },
             Blocks = new[] { new[] { "model", "options" } },
             ModelPaths = new[] { new[] { "model", "id" } },
             NamePaths = new[] { new[] { "name" } },

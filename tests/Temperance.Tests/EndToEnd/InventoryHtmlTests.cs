@@ -282,7 +282,7 @@ public partial class InventoryToolTests
           var chart = r.wideVisible ? wide : (r.compactVisible ? compact : null);
           var dots = chart ? [].slice.call(chart.querySelectorAll('.dot')) : [];
           r.dots = dots.length;
-          r.dotsWithTitle = dots.filter(function (d) { var t = d.querySelector('title'); return !!t && /\.cs:\d+/.test(t.textContent); }).length;
+          r.dotsWithTitle = dots.filter(function (d) { var t = d.querySelector('title'); return !!t && /\.(cs|json|ya?ml|prompty?|md):\d+/.test(t.textContent); }).length;
           r.dotsFocusable = dots.filter(function (d) { return d.getAttribute('tabindex') === '0'; }).length;
           r.chartFits = chart ? chart.parentNode.scrollWidth <= chart.parentNode.clientWidth + 1 : true;
           r.lanes = chart ? [].map.call(chart.querySelectorAll('.lane'), function (l) { return l.getAttribute('data-task'); }) : [];

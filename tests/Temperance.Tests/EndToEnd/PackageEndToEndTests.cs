@@ -330,11 +330,11 @@ public class PackageEndToEndTests : IClassFixture<PackageFixture>
             extraProperties: "<LangVersion>12</LangVersion>");
         consumer.Write("Presets.cs", Presets);
         // A settings file too: the parsers packed beside the analyzer load in this compiler as well.
-        consumer.Write("agent.yaml", "model:\n  id: gpt-4.1-mini\n  options:\n    temperature: 0.6\n    topP: 0.8\n");
+        consumer.Write("agent.yaml", "kind: Prompt\nmodel:\n  id: gpt-4.1-mini\n  options:\n    temperature: 0.6\n    topP: 0.8\n");
         var build = consumer.Build();
         Assert.True(build.ExitCode == 0, build.ToString());
         Assert.Matches("warning SAMP005", build.Output);
-        Assert.Matches(@"agent\.yaml\(5,5(,5,14)?\): warning SAMP004", build.Output);
+        Assert.Matches(@"agent\.yaml\(6,5(,6,14)?\): warning SAMP004", build.Output);
         Assert.DoesNotMatch("CS8032|CS9057|AD0001", build.Output);
     }
 }

@@ -39,6 +39,7 @@ public class SettingsFileFixTests
     {
         const string before = """
             name: CargoPlanner
+            instructions: Plan the loading order of the car deck.
             model:
               id: o4-mini
               options:
@@ -47,6 +48,7 @@ public class SettingsFileFixTests
             """;
         const string after = """
             name: CargoPlanner
+            instructions: Plan the loading order of the car deck.
             model:
               id: o4-mini
               options:
@@ -111,8 +113,8 @@ public class SettingsFileFixTests
     [Fact]
     public async Task SecondFix_OfTemperatureAndTopP_RemovesTheTemperature()
     {
-        const string before = "model:\n  options:\n    temperature: 0.6\n    {|SAMP004:topP: 0.8|}\n";
-        const string after = "model:\n  options:\n    topP: 0.8\n";
+        const string before = "kind: Prompt\nmodel:\n  options:\n    temperature: 0.6\n    {|SAMP004:topP: 0.8|}\n";
+        const string after = "kind: Prompt\nmodel:\n  options:\n    topP: 0.8\n";
         await AssertFixAsync("/Agents/concierge.yaml", before, after, 1);
     }
 
