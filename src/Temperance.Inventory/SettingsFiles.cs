@@ -51,12 +51,11 @@ internal static class SettingsFiles
         var siblings = new SettingsFileContext(files);
         foreach (var file in files)
         {
-            var name = Path.GetFileName(file.Path);
-            FileSurface? surface = name.Equals("config.json", StringComparison.OrdinalIgnoreCase) ? FileSurfaces.PromptDirectory
-                : SettingsFileAnalysis.FrontMatterExtensions.Any(e => name.EndsWith(e, StringComparison.OrdinalIgnoreCase)) ? FileSurfaces.FrontMatterPrompt
-                : null;
-            var yaml = name.EndsWith(".yaml", StringComparison.OrdinalIgnoreCase) || name.EndsWith(".yml", StringComparison.OrdinalIgnoreCase);
-            if ((surface == null && !yaml) || file.GetText(cancellationToken) is not { } text || !FileSurfaces.MayHoldSettings(text.ToString()))
+            // The analyzer's own classification; appsettings files are read where C# binds them, not as requests.
+            var kind = SettingsFileAnalysis.KindOf(file.Path);
+            var surface = SettingsFileAnalysis.SurfaceOf(kind);
+            if (kind is SettingsFileAnalysis.FileKind.None or SettingsFileAnalysis.FileKind.AppSettings
+                || file.GetText(cancellationToken) is not { } text || !FileSurfaces.MayHoldSettings(text.ToString()))
             {
                 continue;
             }

@@ -63,12 +63,7 @@ namespace Temperance.Files
                 return;
             }
 
-            var surface = kind switch
-            {
-                FileKind.PromptDirectory => FileSurfaces.PromptDirectory,
-                FileKind.FrontMatter => FileSurfaces.FrontMatterPrompt,
-                _ => null, // YAML: a template or an agent definition, told apart by its keys
-            };
+            var surface = SurfaceOf(kind);
             var sibling = surface?.SiblingPrompt is { } siblingName ? shared.Find(path, siblingName, context.CancellationToken) : null;
             var requests = FileRequestReader.Read(path, text, surface, sibling, inTestProject, out var error);
             // A YAML file that does not parse is ours to report only when it reads like a template or an agent definition: a
@@ -84,7 +79,7 @@ namespace Temperance.Files
             TemperanceAnalyzer.Judge(requests, policy, context.ReportDiagnostic);
         }
 
-        private enum FileKind
+        internal enum FileKind
         {
             None,
             PromptDirectory,
@@ -93,7 +88,8 @@ namespace Temperance.Files
             AppSettings,
         }
 
-        private static FileKind KindOf(string path)
+        /// <summary>What a file is by its name alone (the inventory asks the same question).</summary>
+        internal static FileKind KindOf(string path)
         {
             var name = Path.GetFileName(path);
             if (name.Equals("config.json", StringComparison.OrdinalIgnoreCase))
@@ -113,6 +109,14 @@ namespace Temperance.Files
 
             return FrontMatterExtensions.Any(e => name.EndsWith(e, StringComparison.OrdinalIgnoreCase)) ? FileKind.FrontMatter : FileKind.None;
         }
+
+        /// <summary>The surface a kind of file always has; null for YAML (a template or an agent definition, told apart by its keys).</summary>
+        internal static FileSurface? SurfaceOf(FileKind kind) => kind switch
+        {
+            FileKind.PromptDirectory => FileSurfaces.PromptDirectory,
+            FileKind.FrontMatter => FileSurfaces.FrontMatterPrompt,
+            _ => null,
+        };
 
         /// <summary>Prompt files with a front matter of model parameters: Prompty, the .prompt format and Markdown prompt files.</summary>
         internal static readonly string[] FrontMatterExtensions = { ".prompty", ".prompt", ".prompt.md" };
