@@ -537,7 +537,7 @@ public static class HtmlReport
             }
 
             result.Append(H(c.ToString()));
-            if ((c is '/' or '_' or '\\' || (dots && c == '.')) && i < value.Length - 1)
+            if ((c is '/' or '_' or '\\' or ':' || (dots && c == '.')) && i < value.Length - 1)
             {
                 result.Append("<wbr>");
             }
@@ -582,11 +582,11 @@ public static class HtmlReport
 
         if (setting.Value is { } value)
         {
-            var note = setting.Source == "literal" ? string.Empty : $"<small>{H(setting.Source)}</small>";
+            var note = setting.Source == "literal" ? string.Empty : $"<small>{Soft(setting.Source)}</small>";
             return $"<span class=\"num\">{N(value)}</span>{note}";
         }
 
-        return $"<span class=\"state state-{H(setting.State)}\">{H(setting.Source)}</span>";
+        return $"<span class=\"state state-{H(setting.State)}\">{Soft(setting.Source)}</span>";
     }
 
     // ---------------------------------------------------------------- style and script

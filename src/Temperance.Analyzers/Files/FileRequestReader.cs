@@ -162,7 +162,8 @@ namespace Temperance.Files
             return new Request
             {
                 Provider = provider,
-                Surface = service == null ? $"{file.Surface.Name} {file.FileName}" : $"{file.Surface.Name} {file.FileName} (service '{service}')",
+                // The kind of file, and the service for a block of several: where the file is, the location says.
+                Surface = service == null ? file.Surface.Name : $"{file.Surface.Name} (service '{service}')",
                 Location = file.Location(blockKey.KeySpan),
                 Context = inTestProject ? TestDataContext : FileContext,
                 // A YAML merge key (<<: *base) brings settings this reader does not follow: what the block does not write is

@@ -104,8 +104,9 @@ public partial class InventoryToolTests
                 var id = group.GetProperty("id").GetString();
                 Assert.EndsWith($"/rules/{id}.md", group.GetProperty("href").GetString(), StringComparison.Ordinal);
                 Assert.True(group.GetProperty("items").GetInt32() > 0, Show());
-                Assert.All(group.GetProperty("sources").EnumerateArray(), s => Assert.Matches(@"^[\w./]+\.cs:\d+$", s.GetString()!));
-                Assert.All(group.GetProperty("sourceLinks").EnumerateArray(), s => Assert.EndsWith(".cs", s.GetString()!, StringComparison.Ordinal));
+                // Call sites in C# and in settings files (a prompt directory's config.json, an agent definition's YAML).
+                Assert.All(group.GetProperty("sources").EnumerateArray(), s => Assert.Matches(@"^[\w./-]+\.(cs|json|ya?ml):\d+$", s.GetString()!));
+                Assert.All(group.GetProperty("sourceLinks").EnumerateArray(), s => Assert.Matches(@"\.(cs|json|ya?ml)$", s.GetString()!));
             }
 
             // The requests: a row (or card) each, with a project column, filters that filter and a sort that sorts.
