@@ -47,7 +47,7 @@ public sealed class LanguageServerClient : IDisposable
     }
 
     /// <summary>Everything the server logged or notified, for assertion messages.</summary>
-    public string Transcript
+    public string ServerLog
     {
         get { lock (log) { return log.ToString(); } }
     }
@@ -64,7 +64,7 @@ public sealed class LanguageServerClient : IDisposable
         }
         catch (TimeoutException)
         {
-            throw new TimeoutException($"{method} got no answer in {timeout.TotalSeconds:0}s. Server said:\n{Transcript}");
+            throw new TimeoutException($"{method} got no answer in {timeout.TotalSeconds:0}s. Server said:\n{ServerLog}");
         }
         finally
         {
@@ -141,7 +141,7 @@ public sealed class LanguageServerClient : IDisposable
         // The server is gone: nothing pending will be answered.
         foreach (var waiting in pending.Values)
         {
-            waiting.TrySetException(new IOException("the language server closed its output. Server said:\n" + Transcript));
+            waiting.TrySetException(new IOException("the language server closed its output. Server said:\n" + ServerLog));
         }
     }
 

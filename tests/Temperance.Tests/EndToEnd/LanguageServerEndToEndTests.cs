@@ -115,7 +115,7 @@ public class LanguageServerEndToEndTests : IClassFixture<PackageFixture>
         Assert.True(
             fromWorkspace.Intersect(expected).Any() && fromDocument.Intersect(expected).Any(),
             $"expected SAMP004 or SAMP005 on line {topP} of config.json; workspace/diagnostic gave [{string.Join(", ", fromWorkspace)}], " +
-            $"textDocument/diagnostic gave [{string.Join(", ", fromDocument)}]\n---\nworkspace report: {workspace}\n---\nServer said:\n{server.Transcript}");
+            $"textDocument/diagnostic gave [{string.Join(", ", fromDocument)}]\n---\nworkspace report: {workspace}\n---\nServer said:\n{server.ServerLog}");
     }
 
     private static void Restore(Consumer consumer)
