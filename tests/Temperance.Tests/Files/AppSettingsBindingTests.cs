@@ -340,6 +340,36 @@ public class AppSettingsBindingTests
             Verify.Diagnostic("SAMP009").WithLocation(0).WithMessage(Extreme("1.8", "configuration 'FerryDesk:Temperature' in appsettings.json")));
     }
 
+    /// <summary>Precision twin: the bound value sent to a Moq double in a test reaches no model; the product's send still fires.</summary>
+    [Fact]
+    public async Task ConfiguredValueSentToAMoqDouble_IsSilent_WhileTheProductTwinIsFlagged()
+    {
+        const string test = """
+            using System.Collections.Generic;
+            using System.Threading;
+            using System.Threading.Tasks;
+            using Microsoft.Extensions.AI;
+            using Microsoft.Extensions.Options;
+            using Moq;
+            using Xunit;
+
+            public class CrossingChatTests
+            {
+                [Fact]
+                public async Task PassesTheConfiguredTemperature()
+                {
+                    var configured = Microsoft.Extensions.Options.Options.Create(new FerryDeskOptions());
+                    var chat = new Mock<IChatClient>();
+                    chat.Setup(c => c.GetResponseAsync(It.IsAny<IEnumerable<ChatMessage>>(), It.IsAny<ChatOptions?>(), It.IsAny<CancellationToken>()))
+                        .ReturnsAsync(new ChatResponse(new ChatMessage(ChatRole.Assistant, "The 09:40 crossing runs.")));
+                    await chat.Object.GetResponseAsync("Does the 09:40 run?", new ChatOptions { Temperature = configured.Value.Temperature });
+                }
+            }
+            """;
+        await Verify.FilesAsync(new[] { Base("""{ "FerryDesk": { "Temperature": 1.8 } }""") }, new[] { Desk, Options, test }, null,
+            Verify.Diagnostic("SAMP009").WithLocation(0).WithMessage(Extreme("1.8", "configuration 'FerryDesk:Temperature' in appsettings.json")));
+    }
+
     /// <summary>Regression: options the code builds and fills itself hold what it wrote, not what the file says.</summary>
     [Fact]
     public async Task OptionsBuiltAndFilledInCode_AreNotConfiguration()
